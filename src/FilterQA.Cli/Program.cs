@@ -1,1 +1,3 @@
-return 1;
+using FilterQA.Cli;
+
+return CliApplication.Run(args, Console.Out, Console.Error);
