@@ -69,7 +69,8 @@ internal sealed class DelimitedTextParser
         }
         if (!_started)
         {
-            _delimiter = _options.Delimiter ?? DelimitedCellSplitter.Detect(text) ?? '\0';
+            // With no delimiter found the row is one cell (or holds a control character): either is reported below.
+            _delimiter = _options.Delimiter ?? DelimitedCellSplitter.Detect(text) ?? ',';
         }
         if (!DelimitedCellSplitter.TrySplit(text, _delimiter, _cells, out int badCell, out string? problem))
         {

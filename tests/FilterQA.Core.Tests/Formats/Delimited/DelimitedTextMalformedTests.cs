@@ -42,6 +42,7 @@ public sealed class DelimitedTextMalformedTests
             { "phase in radians", Bytes("Freq (Hz),S21 dB,Phase (rad)\n1,-1,0.5\n"), 1, 3, "phase in radians" },
             { "both dB and dBm columns", Bytes("Freq (Hz),Gain dB,Power dBm\n1,-1,-11\n"), 1, 0, "both a dB column" },
             { "control character", Bytes(H + "1,-1\n2\u0001,-2\n"), 3, 1, "control character U+0001" },
+            { "NUL between two numbers", Bytes("1000\u0000-1\n"), 1, 1, "control character U+0000" },
             { "NUL in a comment", Bytes("# ok\n#\u0000\n" + H + "1,-1\n"), 2, 1, "control character U+0000" },
             { "invalid UTF-8 bytes", [.. Bytes(H + "1,-1\n2,"), 0xC3, 0x28, .. Bytes("\n")], 3, 2, "not UTF-8 text" },
             { "binary junk", [0x89, 0x50, 0x4E, 0x47, 0x0D, 0x0A, 0x1A, 0x0A, 0x00, 0x00], 1, 1, "not UTF-8 text" },

@@ -243,6 +243,18 @@ public sealed class DelimitedTextReaderTests
         Assert.Equal([-13.0], Level(sweep));
     }
 
+    [Theory]
+    [InlineData(".5", 0.5)]
+    [InlineData("5.", 5.0)]
+    [InlineData("+5.e-1", 0.5)]
+    [InlineData("-2.5E+2", -250.0)]
+    [InlineData("  7  ", 7.0)]
+    public void Decimal_number_forms_are_read(string cell, double expected)
+    {
+        // Plain decimal notation; each expected value is the number written in the cell (exact in binary64).
+        Assert.Equal(expected, Level(Read($"1000,{cell}\n"))[0]);
+    }
+
     [Fact]
     public void Read_file_keeps_the_name_without_folder_and_reports_a_missing_file_as_a_read_error()
     {
