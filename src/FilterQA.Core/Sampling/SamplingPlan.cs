@@ -47,25 +47,25 @@ public sealed record SamplingPlan
     public bool IsFullInspection { get; }
 
     /// <summary>Inspection level (table plans only; null otherwise).</summary>
-    public InspectionLevel? Level { get; init; }
+    public InspectionLevel? Level { get; internal init; }
 
     /// <summary>Severity (table plans only; null otherwise).</summary>
-    public InspectionSeverity? Severity { get; init; }
+    public InspectionSeverity? Severity { get; internal init; }
 
     /// <summary>AQL, percent nonconforming (table plans only; null otherwise).</summary>
-    public double? AqlPercent { get; init; }
+    public double? AqlPercent { get; internal init; }
 
     /// <summary>Code letter from Table I (table plans only; null otherwise).</summary>
-    public CodeLetter? TableLetter { get; init; }
+    public CodeLetter? TableLetter { get; internal init; }
 
     /// <summary>Code letter whose plan is used after following the table's arrows (table plans only).</summary>
-    public CodeLetter? LetterUsed { get; init; }
+    public CodeLetter? LetterUsed { get; internal init; }
 
     /// <summary>Lot tolerance fraction defective p1 the plan guards against, 0..1 (zero-acceptance plans only).</summary>
-    public double? LtpdFraction { get; init; }
+    public double? LtpdFraction { get; internal init; }
 
     /// <summary>Confidence 1 − β that a lot at the LTPD is rejected, 0..1 (zero-acceptance plans only).</summary>
-    public double? Confidence { get; init; }
+    public double? Confidence { get; internal init; }
 
     /// <summary>
     /// True when the plan leaves a gap between Ac and Re (reduced inspection): a result in the gap
