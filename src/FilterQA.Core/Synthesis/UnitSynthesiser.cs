@@ -75,7 +75,7 @@ public sealed class UnitSynthesiser
         var flat = new Complex[4 * n];
         Span<Complex> s11 = flat.AsSpan(0, n), s12 = flat.AsSpan(n, n), s21 = flat.AsSpan(2 * n, n), s22 = flat.AsSpan(3 * n, n);
         ulong key = UnitKey(part, serialIndex);
-        var parameters = new DeterministicRandom(StableHash.Combine(key, ParameterStream));
+        DeterministicRandom parameters = ParameterRandom(part, serialIndex);
         part.Design.Synthesise(part.Grid, ref parameters, defect, s11, s21, s22);
 
         var noise = new DeterministicRandom(StableHash.Combine(key, NetworkNoiseStream));
@@ -206,7 +206,7 @@ public sealed class UnitSynthesiser
         var scratch = new Complex[3 * n];
         Span<Complex> s11 = scratch.AsSpan(0, n), s21 = scratch.AsSpan(n, n), s22 = scratch.AsSpan(2 * n, n);
         ulong key = UnitKey(part, serialIndex);
-        var parameters = new DeterministicRandom(StableHash.Combine(key, ParameterStream));
+        DeterministicRandom parameters = ParameterRandom(part, serialIndex);
         part.Design.Synthesise(part.Grid, ref parameters, defect, s11, s21, s22);
 
         double[] level = ThruShapeDbm(part, station);
@@ -283,6 +283,10 @@ public sealed class UnitSynthesiser
         "Synthetic demo data, not a measurement.",
         string.Create(CultureInfo.InvariantCulture, $"Part {part.PartNumber}, {what}, synthesiser seed {Seed}."),
     ];
+
+    /// <summary>The stream a unit's physical parameters are drawn from (tests use it to recover a unit's model values).</summary>
+    internal DeterministicRandom ParameterRandom(DemoPart part, int serialIndex) =>
+        new(StableHash.Combine(UnitKey(part, serialIndex), ParameterStream));
 
     private ulong UnitKey(DemoPart part, int serialIndex) =>
         StableHash.Combine(StableHash.Combine(StableHash.Mix(Seed), StableHash.Of(part.PartNumber)), (ulong)serialIndex);
