@@ -123,6 +123,6 @@ public sealed record LimitLineRule : LimitRule
         {
             hash.Add(a);
         }
-        return hash.GetHashCode();
+        return hash.ToHashCode();
     }
 }

@@ -44,7 +44,7 @@ internal static partial class Quantities
     {
         value = double.NaN;
         isPpm = false;
-        if (!TrySplit(text, kind, out decimal number, out string unit, out error))
+        if (!TrySplit(text, kind, out string numberText, out decimal number, out string unit, out error))
         {
             return false;
         }
@@ -61,7 +61,7 @@ internal static partial class Quantities
                 error = $"'{text}' must be a plain number without unit";
                 return false;
             }
-            return ToDouble(number, 1m, text, out value, out error);
+            return ToDouble(numberText, number, 1m, text, out value, out error);
         }
         if (Aliases.TryGetValue(unit, out string? canonical))
         {
@@ -78,7 +78,7 @@ internal static partial class Quantities
         {
             if (symbol == unit)
             {
-                return ToDouble(number, scale, text, out value, out error);
+                return ToDouble(numberText, number, scale, text, out value, out error);
             }
         }
         string? sameLetters = units.Select(u => u.Symbol).FirstOrDefault(s => string.Equals(s, unit, StringComparison.OrdinalIgnoreCase));
@@ -92,10 +92,10 @@ internal static partial class Quantities
     internal static bool TryReadTolerance(string text, out double value, out ToleranceUnit unit, out string? error)
     {
         unit = ToleranceUnit.Hertz;
-        if (TrySplit(text, QuantityKind.Frequency, out decimal number, out string symbol, out error) && symbol == "ppm")
+        if (TrySplit(text, QuantityKind.Frequency, out string numberText, out decimal number, out string symbol, out error) && symbol == "ppm")
         {
             unit = ToleranceUnit.PartsPerMillion;
-            return ToDouble(number, 1m, text, out value, out error);
+            return ToDouble(numberText, number, 1m, text, out value, out error);
         }
         if (TryRead(text, QuantityKind.Frequency, out value, out _, out error))
         {
@@ -108,31 +108,57 @@ internal static partial class Quantities
     /// <summary>Writes an SI value with the unit that reads best (see the class summary).</summary>
     internal static string Write(double value, QuantityKind kind)
     {
-        decimal exact = Exact(value);
+        string baseSymbol = kind == QuantityKind.Number ? "" : Units[kind].First(unit => unit.Scale == 1m).Symbol;
+        if (!TryExact(value, out decimal exact))
+        {
+            // Beyond what a decimal holds exactly (far outside any real limit): the shortest round-trip
+            // digits in the base unit, which the reader parses without scaling.
+            return Join(value.ToString("R", CultureInfo.InvariantCulture), baseSymbol);
+        }
         if (kind == QuantityKind.Number)
         {
             return Plain(exact);
         }
-        (string Symbol, decimal Scale)[] units = Units[kind];
         decimal magnitude = Math.Abs(exact);
-        foreach ((string symbol, decimal scale) in units)
+        foreach ((string symbol, decimal scale) in Units[kind])
         {
-            if (magnitude >= scale && decimal.Round(exact / scale, 20) * scale == exact)
+            if (magnitude >= scale && ScalesExactly(exact, scale, value, out decimal scaled))
             {
-                return Plain(decimal.Round(exact / scale, 20)) + " " + symbol;
+                return Join(Plain(scaled), symbol);
             }
         }
-        (string lastSymbol, decimal lastScale) = units[^1];
-        return Plain(exact / lastScale) + " " + lastSymbol;
+        return Join(Plain(exact), baseSymbol);
+    }
+
+    private static bool IsDecimalPowerOfTen(decimal scale)
+    {
+        string digits = scale.ToString(CultureInfo.InvariantCulture).Replace(".", "", StringComparison.Ordinal).Trim('0');
+        return digits == "1";
+    }
+
+    private static string Join(string number, string symbol) => symbol.Length == 0 ? number : number + " " + symbol;
+
+    /// <summary>True when exact / scale, read back with the scale, gives the same double.</summary>
+    private static bool ScalesExactly(decimal exact, decimal scale, double value, out decimal scaled)
+    {
+        scaled = exact / scale;
+        // Division by a power of ten is exact in decimal; by 60 or 3600 it is exact only for a short quotient
+        // (a long one, like 16.666... min, is rounded and must not be written).
+        bool powerOfTen = IsDecimalPowerOfTen(scale);
+        return (powerOfTen || decimal.Round(scaled, 9) == scaled)
+            && scaled * scale == exact
+            && ToDouble(Plain(scaled), decimal.Parse(Plain(scaled), NumberStyles.Float, CultureInfo.InvariantCulture), scale, "", out double back, out _)
+            && back.Equals(value);
     }
 
     /// <summary>Writes a tolerance: ppm as "20 ppm", hertz like any frequency.</summary>
     internal static string WriteTolerance(double value, ToleranceUnit unit) =>
-        unit == ToleranceUnit.PartsPerMillion ? Plain(Exact(value)) + " ppm" : Write(value, QuantityKind.Frequency);
+        unit == ToleranceUnit.PartsPerMillion ? Write(value, QuantityKind.Number) + " ppm" : Write(value, QuantityKind.Frequency);
 
-    private static bool TrySplit(string text, QuantityKind kind, out decimal number, out string unit, out string? error)
+    private static bool TrySplit(string text, QuantityKind kind, out string numberText, out decimal number, out string unit, out string? error)
     {
         number = 0;
+        numberText = "";
         unit = "";
         Match match = QuantityPattern().Match(text);
         if (!match.Success)
@@ -142,9 +168,10 @@ internal static partial class Quantities
                 : $"'{text}' is not a quantity; expected a number and a unit, e.g. '{Example(kind)}'";
             return false;
         }
+        numberText = match.Groups["number"].Value;
         try
         {
-            number = decimal.Parse(match.Groups["number"].Value, NumberStyles.Float, CultureInfo.InvariantCulture);
+            number = decimal.Parse(numberText, NumberStyles.Float, CultureInfo.InvariantCulture);
         }
         catch (OverflowException)
         {
@@ -156,12 +183,19 @@ internal static partial class Quantities
         return true;
     }
 
-    private static bool ToDouble(decimal number, decimal scale, string text, out double value, out string? error)
+    private static bool ToDouble(string numberText, decimal number, decimal scale, string text, out double value, out string? error)
     {
         try
         {
-            // Parse the exact decimal text so the double is the one nearest the written value.
-            value = double.Parse((number * scale).ToString(CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+            // Unscaled text is parsed as written; scaled text is scaled exactly in decimal and parsed once,
+            // so either way the double is the one nearest the written value.
+            string exactText = scale == 1m ? numberText : (number * scale).ToString(CultureInfo.InvariantCulture);
+            value = double.Parse(exactText, NumberStyles.Float, CultureInfo.InvariantCulture);
+            if (!double.IsFinite(value))
+            {
+                error = $"'{text}' is too large a number";
+                return false;
+            }
             error = null;
             return true;
         }
@@ -173,14 +207,24 @@ internal static partial class Quantities
         }
     }
 
-    private static decimal Exact(double value)
+    private static bool TryExact(double value, out decimal exact)
     {
         if (!double.IsFinite(value))
         {
             throw new ArgumentException(Checks.Say($"cannot write {value} as a quantity; values must be finite"));
         }
-        // The shortest round-trip text, read as a decimal, is exact; scaling it by powers of ten stays exact.
-        return decimal.Parse(value.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+        // The shortest round-trip text, read as a decimal, is exact when it fits; scaling by powers of ten stays exact.
+        string shortest = value.ToString("R", CultureInfo.InvariantCulture);
+        try
+        {
+            exact = decimal.Parse(shortest, NumberStyles.Float, CultureInfo.InvariantCulture);
+        }
+        catch (OverflowException)
+        {
+            exact = 0;
+            return false;
+        }
+        return double.Parse(Plain(exact), NumberStyles.Float, CultureInfo.InvariantCulture).Equals(value);
     }
 
     private static string Plain(decimal value)
