@@ -10,6 +10,9 @@ internal ref partial struct TouchstoneParser
 {
     private const double DegreesToRadians = Math.PI / 180.0;
 
+    /// <summary>ln(10)/20: 10^(a/20) = e^(a·ln10/20). Exp is several times faster than Pow and within a few units in the last place.</summary>
+    private const double DecibelToNeper = 0.11512925464970229;
+
     private static readonly string[] NoiseValueNames =
     [
         "noise frequency", "minimum noise figure NFmin in dB", "magnitude of the optimum source reflection",
@@ -298,7 +301,7 @@ internal ref partial struct TouchstoneParser
                 magnitude = a;
                 break;
             default:
-                magnitude = Math.Pow(10.0, a / 20.0);
+                magnitude = Math.Exp(a * DecibelToNeper);
                 if (double.IsInfinity(magnitude))
                 {
                     throw ErrorAt(aLine, aColumn, Invariant($"{a:R} dB ({ElementName(valueIndex)}) is too large: its magnitude overflows a double"));
