@@ -89,23 +89,6 @@ public static class DelimitedTextReader
     public static Sweep ReadFile(string path, DelimitedTextOptions? options = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
-        string fileName = Path.GetFileName(path);
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
-        {
-            string why = e switch
-            {
-                FileNotFoundException => "the file does not exist",
-                DirectoryNotFoundException => "the folder of the file does not exist",
-                UnauthorizedAccessException => "access to the file is denied",
-                _ => "the file cannot be read (" + e.GetType().Name + ")",
-            };
-            throw new SweepReadException(fileName, 0, 0, why, e);
-        }
-        return Read(bytes, fileName, options);
+        return Read(SweepFileBytes.Read(path), Path.GetFileName(path), options);
     }
 }

@@ -52,17 +52,7 @@ public static class TouchstoneReader
     public static Sweep ReadFile(string path)
     {
         ArgumentNullException.ThrowIfNull(path);
-        string name = Path.GetFileName(path);
-        byte[] content;
-        try
-        {
-            content = File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException or System.Security.SecurityException)
-        {
-            throw new SweepReadException(name, 0, 0, $"the file cannot be read: {ex.Message}", ex);
-        }
-        return ReadCore(content, name, 0);
+        return ReadCore(SweepFileBytes.Read(path), Path.GetFileName(path), 0);
     }
 
     private static Sweep ReadCore(ReadOnlySpan<byte> content, string fileName, int portCount)
