@@ -65,7 +65,7 @@ public static class FilterMeasurer
         var rejections = new StopbandResult[stopbands.Count];
         if (rejections.Length > 0)
         {
-            double? estimated = floorLossDb.IsEmpty ? StopbandRejection.EstimateWithWarning(f, loss, warnings)?.LossDb : null;
+            NoiseFloorEstimate? estimated = floorLossDb.IsEmpty ? StopbandRejection.EstimateWithWarning(f, loss, warnings) : null;
             for (int i = 0; i < rejections.Length; i++)
             {
                 rejections[i] = StopbandRejection.Over(f, loss, minLossDb, stopbands[i], floorLossDb, estimated, warnings);

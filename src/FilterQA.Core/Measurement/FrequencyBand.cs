@@ -56,6 +56,6 @@ public sealed record FrequencyBand
     public bool IsCoveredBy(double sweepStartHz, double sweepStopHz) =>
         sweepStartHz <= StartHz * (1 + RelativeEdgeTolerance) && sweepStopHz >= StopHz * (1 - RelativeEdgeTolerance);
 
-    /// <summary>The band as text, e.g. "1000000–2000000 Hz" (invariant culture).</summary>
-    public override string ToString() => string.Create(CultureInfo.InvariantCulture, $"{StartHz:R}–{StopHz:R} Hz");
+    /// <summary>The band as text, e.g. "1000000–2000000 Hz" (invariant culture, to the millihertz).</summary>
+    public override string ToString() => string.Create(CultureInfo.InvariantCulture, $"{StartHz:0.###}–{StopHz:0.###} Hz");
 }

@@ -42,10 +42,10 @@ public static class NoiseFloor
     public const int MaxWindowPoints = 64;
 
     /// <summary>
-    /// Half-width, in points, of the neighbourhood over which a caller's floor trace is averaged (in linear power)
-    /// around a reading, so a single noisy floor point does not decide.
+    /// Half-width, in points, of the neighbourhood whose scatter is read around a stopband reading when the floor is
+    /// estimated: 16 (33 points, enough for a robust median, narrow enough to stay local).
     /// </summary>
-    public const int FloorNeighbourhoodHalfWidthPoints = 8;
+    public const int NeighbourhoodHalfWidthPoints = 16;
 
     // 0.6745 = the median of |z| for a standard normal z; √6 from the second difference of white scatter.
     private const double MedianAbsSecondDifferencePerSigma = 0.674489750196082 * 2.449489742783178;
@@ -54,8 +54,8 @@ public static class NoiseFloor
     /// <param name="floorLossDb">Floor as a loss below the thru, dB (e.g. 95 for a floor 95 dB below the thru).</param>
     public static double VerifiableLossDb(double floorLossDb) => floorLossDb - MarginDb;
 
-    /// <summary>True when a reading of <paramref name="lossDb"/> is within <see cref="MarginDb"/> of (or beyond) the floor.</summary>
-    public static bool IsFloorLimited(double lossDb, double floorLossDb) => lossDb >= floorLossDb - MarginDb;
+    /// <summary>True when a reading of <paramref name="lossDb"/> keeps less than <see cref="MarginDb"/> to the floor (a reading exactly the margin above it is still verifiable).</summary>
+    public static bool IsFloorLimited(double lossDb, double floorLossDb) => lossDb > floorLossDb - MarginDb;
 
     /// <summary>Estimates the floor from the sweep itself (see the remarks for the method). Null for fewer than <see cref="MinWindowPoints"/> points.</summary>
     public static NoiseFloorEstimate? Estimate(ResponseTrace trace)
@@ -92,20 +92,34 @@ public static class NoiseFloor
         }
 
         ReadOnlySpan<double> window = loss.Slice(start, width);
-        Span<double> second = stackalloc double[MaxWindowPoints];
-        int count = width - 2;
-        for (int i = 1; i <= count; i++)
-        {
-            second[i - 1] = Math.Abs(window[i - 1] - 2 * window[i] + window[i + 1]);
-        }
-        Span<double> used = second[..count];
-        used.Sort();
-        double median = (count & 1) == 1 ? used[count / 2] : 0.5 * (used[(count / 2) - 1] + used[count / 2]);
-        double scatterDb = median / MedianAbsSecondDifferencePerSigma;
+        double scatterDb = ScatterDb(window);
 
         double levelDb = PowerMeanLossDb(window);
         bool noise = scatterDb >= NoiseScatterThresholdDb;
         return new NoiseFloorEstimate(noise ? levelDb : levelDb + MarginDb, noise, scatterDb, f[start], f[start + width - 1]);
+    }
+
+    /// <summary>Robust scatter of the loss around point <paramref name="index"/>, over ±<see cref="NeighbourhoodHalfWidthPoints"/> points.</summary>
+    internal static double LocalScatterDb(ReadOnlySpan<double> loss, int index)
+    {
+        int from = Math.Max(0, index - NeighbourhoodHalfWidthPoints);
+        int to = Math.Min(loss.Length, index + NeighbourhoodHalfWidthPoints + 1);
+        return to - from >= 3 ? ScatterDb(loss[from..to]) : 0;
+    }
+
+    /// <summary>Median of |second differences| over 0.6745·√6: a standard-deviation equivalent that ignores a few outliers.</summary>
+    private static double ScatterDb(ReadOnlySpan<double> values)
+    {
+        Span<double> second = stackalloc double[MaxWindowPoints];
+        int count = Math.Min(values.Length - 2, MaxWindowPoints);
+        for (int i = 1; i <= count; i++)
+        {
+            second[i - 1] = Math.Abs(values[i - 1] - 2 * values[i] + values[i + 1]);
+        }
+        Span<double> used = second[..count];
+        used.Sort();
+        double median = (count & 1) == 1 ? used[count / 2] : 0.5 * (used[(count / 2) - 1] + used[count / 2]);
+        return median / MedianAbsSecondDifferencePerSigma;
     }
 
     /// <summary>The mean of the linear power of the points, as a loss in dB: −10·log10(mean 10^(−L/10)).</summary>

@@ -13,9 +13,9 @@ public static class StopbandRejection
     /// <param name="band">The stopband.</param>
     /// <param name="floorLossDb">
     /// Optional floor trace as loss, dB, one value per point of the trace's grid (a sweep with the fixture terminated
-    /// and no part, resampled by the caller onto this grid). The floor at a reading is the linear-power mean of the floor
-    /// over ±<see cref="NoiseFloor.FloorNeighbourhoodHalfWidthPoints"/> points around it. When empty, the floor is
-    /// estimated with <see cref="NoiseFloor.Estimate(ResponseTrace)"/> and a <c>floor-estimated</c> warning says so.
+    /// and no part, resampled by the caller onto this grid). The floor is read at its strongest point inside the band (its
+    /// least loss there), so a noisy floor trace is compared peak to peak with the reading and a floor that varies across
+    /// the band is read where it is worst (conservative). When empty, the floor is estimated with <see cref="NoiseFloor.Estimate(ResponseTrace)"/> and a <c>floor-estimated</c> warning says so.
     /// </param>
     /// <param name="warnings">Optional sink for warnings (band coverage, floor estimated, floor-limited).</param>
     /// <exception cref="ArgumentException">The floor trace is not as long as the grid or holds a value that is not finite.</exception>
@@ -27,7 +27,7 @@ public static class StopbandRejection
         ReadOnlySpan<double> f = trace.Grid.Hz;
         ReadOnlySpan<double> loss = trace.LossDb;
         CheckFloor(floorLossDb, f.Length, nameof(floorLossDb));
-        double? estimated = floorLossDb.IsEmpty ? EstimateWithWarning(f, loss, warnings)?.LossDb : null;
+        NoiseFloorEstimate? estimated = floorLossDb.IsEmpty ? EstimateWithWarning(f, loss, warnings) : null;
         double reference = loss[Loss.MinimumIndex(loss)];
         return Over(f, loss, reference, band, floorLossDb, estimated, warnings);
     }
@@ -78,7 +78,7 @@ public static class StopbandRejection
     }
 
     internal static StopbandResult Over(ReadOnlySpan<double> f, ReadOnlySpan<double> loss, double referenceLossDb, FrequencyBand band,
-        ReadOnlySpan<double> floorTrace, double? estimatedFloorLossDb, ICollection<MeasurementWarning>? warnings)
+        ReadOnlySpan<double> floorTrace, NoiseFloorEstimate? estimated, ICollection<MeasurementWarning>? warnings)
     {
         BandIndexRange range = BandIndexRange.Of(f, band);
         Warnings.BandCoverage(warnings, f, band, range, "stopband");
@@ -96,19 +96,34 @@ public static class StopbandRejection
                 at = i;
             }
         }
-        double? floor = estimatedFloorLossDb;
+        double? floor;
+        bool limited;
         if (!floorTrace.IsEmpty)
         {
-            int from = Math.Max(0, at - NoiseFloor.FloorNeighbourhoodHalfWidthPoints);
-            int to = Math.Min(floorTrace.Length, at + NoiseFloor.FloorNeighbourhoodHalfWidthPoints + 1);
-            floor = NoiseFloor.PowerMeanLossDb(floorTrace[from..to]);
+            double strongest = floorTrace[range.First];
+            for (int i = range.First + 1; i < range.End; i++)
+            {
+                strongest = Math.Min(strongest, floorTrace[i]);
+            }
+            floor = strongest;
+            limited = NoiseFloor.IsFloorLimited(least, strongest);
         }
-        bool limited = floor is { } level && NoiseFloor.IsFloorLimited(least, level);
+        else if (estimated is not null)
+        {
+            floor = estimated.LossDb;
+            limited = NoiseFloor.IsFloorLimited(least, estimated.LossDb)
+                || NoiseFloor.LocalScatterDb(loss, at) >= NoiseFloor.NoiseScatterThresholdDb;
+        }
+        else
+        {
+            floor = null;
+            limited = false;
+        }
         double rejection = least - referenceLossDb;
         if (limited)
         {
             Warnings.Add(warnings, MeasurementWarningCodes.FloorLimited,
-                $"stopband {band}: the least loss {Warnings.N(least)} dB at {Warnings.N(f[at])} Hz is within {Warnings.N(NoiseFloor.MarginDb)} dB of the noise floor ({Warnings.N(floor!.Value)} dB): rejection is at least {Warnings.N(rejection)} dB");
+                $"stopband {band}: the least loss {Warnings.N(least)} dB at {Warnings.N(f[at])} Hz is at the noise floor ({Warnings.N(floor!.Value)} dB; less than {Warnings.N(NoiseFloor.MarginDb)} dB margin, or the points around it scatter like noise): rejection is at least {Warnings.N(rejection)} dB");
         }
         return new StopbandResult(band.StartHz, band.StopHz, rejection, least, f[at], limited, floor);
     }

@@ -8,8 +8,14 @@ internal static class Warnings
     public static void Add(ICollection<MeasurementWarning>? sink, string code, string message) =>
         sink?.Add(new MeasurementWarning(code, message));
 
-    /// <summary>Formats a number for a message: invariant, up to 6 significant digits.</summary>
-    public static string N(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+    /// <summary>
+    /// Formats a number for a message, invariant: large values (frequencies) in plain digits to the millihertz, others to
+    /// 6 significant digits.
+    /// </summary>
+    public static string N(double value) =>
+        Math.Abs(value) is >= 1e5 and < 1e15
+            ? value.ToString("0.###", CultureInfo.InvariantCulture)
+            : value.ToString("G6", CultureInfo.InvariantCulture);
 
     /// <summary>Formats a count for a message.</summary>
     public static string N(int value) => value.ToString(CultureInfo.InvariantCulture);
