@@ -15,7 +15,7 @@ internal readonly record struct BandIndexRange(int First, int End)
         return new BandIndexRange(first, Math.Max(first, end));
     }
 
-    private static int FirstAtOrAbove(ReadOnlySpan<double> hz, double value)
+    internal static int FirstAtOrAbove(ReadOnlySpan<double> hz, double value)
     {
         int lo = 0, hi = hz.Length;
         while (lo < hi)
@@ -33,7 +33,7 @@ internal readonly record struct BandIndexRange(int First, int End)
         return lo;
     }
 
-    private static int FirstAbove(ReadOnlySpan<double> hz, double value)
+    internal static int FirstAbove(ReadOnlySpan<double> hz, double value)
     {
         int lo = 0, hi = hz.Length;
         while (lo < hi)

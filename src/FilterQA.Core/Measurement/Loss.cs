@@ -1,3 +1,4 @@
+using System.Numerics;
 using FilterQA.Core.Sweeps;
 
 namespace FilterQA.Core.Measurement;
@@ -39,19 +40,55 @@ public static class Loss
         return Interpolate(f, trace.LossDb, hz);
     }
 
+    /// <summary>Index of the first point of least loss. The values are finite (a trace guarantees it), so a vector minimum is exact.</summary>
     internal static int MinimumIndex(ReadOnlySpan<double> loss)
     {
-        int index = 0;
-        double least = loss[0];
-        for (int i = 1; i < loss.Length; i++)
+        double least = MinimumValue(loss);
+        int width = Vector<double>.Count;
+        int i = 0;
+        if (Vector.IsHardwareAccelerated)
         {
-            if (loss[i] < least)
+            var target = new Vector<double>(least);
+            for (; i <= loss.Length - width; i += width)
             {
-                least = loss[i];
-                index = i;
+                if (Vector.EqualsAny(new Vector<double>(loss[i..]), target))
+                {
+                    break;
+                }
             }
         }
-        return index;
+        for (; i < loss.Length; i++)
+        {
+            if (loss[i] == least)
+            {
+                return i;
+            }
+        }
+        return 0;
+    }
+
+    private static double MinimumValue(ReadOnlySpan<double> values)
+    {
+        int width = Vector<double>.Count;
+        int i = 0;
+        double least = values[0];
+        if (Vector.IsHardwareAccelerated && values.Length >= 2 * width)
+        {
+            var lanes = new Vector<double>(values);
+            for (i = width; i <= values.Length - width; i += width)
+            {
+                lanes = Vector.Min(lanes, new Vector<double>(values[i..]));
+            }
+            for (int k = 0; k < width; k++)
+            {
+                least = Math.Min(least, lanes[k]);
+            }
+        }
+        for (; i < values.Length; i++)
+        {
+            least = Math.Min(least, values[i]);
+        }
+        return least;
     }
 
     /// <summary>Linear interpolation of <paramref name="y"/> at <paramref name="x"/> inside [f[0], f[^1]].</summary>

@@ -1,3 +1,4 @@
+using System.Numerics;
 using FilterQA.Core.Sweeps;
 
 namespace FilterQA.Core.Measurement;
@@ -43,6 +44,10 @@ public static class StopbandRejection
             throw new ArgumentException(
                 $"the floor trace has {Warnings.N(floorLossDb.Length)} values for a grid of {Warnings.N(count)} points; resample it onto the trace's grid", name);
         }
+        if (AllFinite(floorLossDb))
+        {
+            return;
+        }
         for (int i = 0; i < floorLossDb.Length; i++)
         {
             if (!double.IsFinite(floorLossDb[i]))
@@ -50,6 +55,25 @@ public static class StopbandRejection
                 throw new ArgumentException($"the floor trace value at index {Warnings.N(i)} is {Warnings.N(floorLossDb[i])}; it must be finite", name);
             }
         }
+    }
+
+    // x − x is 0 for a finite x and NaN for NaN or an infinity; a vector sum of those is NaN exactly when one is bad.
+    private static bool AllFinite(ReadOnlySpan<double> values)
+    {
+        int width = Vector<double>.Count;
+        int i = 0;
+        var lanes = Vector<double>.Zero;
+        for (; i <= values.Length - width; i += width)
+        {
+            var v = new Vector<double>(values[i..]);
+            lanes += v - v;
+        }
+        double rest = 0;
+        for (; i < values.Length; i++)
+        {
+            rest += values[i] - values[i];
+        }
+        return Vector.EqualsAll(lanes, lanes) && rest == 0;
     }
 
     internal static NoiseFloorEstimate? EstimateWithWarning(ReadOnlySpan<double> f, ReadOnlySpan<double> loss, ICollection<MeasurementWarning>? warnings)

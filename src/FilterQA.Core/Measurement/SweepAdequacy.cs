@@ -66,16 +66,8 @@ public static class SweepAdequacy
     private static void CheckBand(ReadOnlySpan<double> f, double lower, double upper, double width, double levelDb, ICollection<MeasurementWarning> warnings)
     {
         // Points inside [lower, upper], and the steps that span the band including the two that straddle its edges.
-        int first = 0;
-        while (first < f.Length && f[first] < lower)
-        {
-            first++;
-        }
-        int end = first;
-        while (end < f.Length && f[end] <= upper)
-        {
-            end++;
-        }
+        int first = BandIndexRange.FirstAtOrAbove(f, lower);
+        int end = BandIndexRange.FirstAbove(f, upper);
         int inside = end - first;
         int from = Math.Max(0, first - 1), to = Math.Min(f.Length - 1, end);
         double step = 0;
