@@ -20,7 +20,7 @@ namespace FilterQA.Core.Measurement;
 /// <see cref="NoiseScatterThresholdDb"/> at m = <see cref="MarginDb"/>. A window that scatters at least that much is
 /// therefore within the margin of its own floor: the floor is taken as the window's mean linear power in dB. A window
 /// that scatters less is clean: the floor is at least the margin deeper than the window's level.</para>
-/// <para>Limits: trace averaging done on dB values (video averaging) lowers the scatter without lowering the floor,
+/// <para>Limits: averaging done on dB values (log-domain averaging) lowers the scatter without lowering the floor,
 /// and dense real ripple in a deep stopband (for example SAW sidelobes) scatters like noise. A measured floor trace is
 /// always better; every estimated floor comes with a <c>floor-estimated</c> warning.</para>
 /// </remarks>
