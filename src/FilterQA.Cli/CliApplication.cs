@@ -12,8 +12,7 @@ public static class CliApplication
     private static readonly IReadOnlyDictionary<string, ICommand> Commands = new Dictionary<string, ICommand>(StringComparer.Ordinal)
     {
         ["measure"] = new MeasureCommand(),
-        ["check"] = new CheckCommand(),
-        ["validate-template"] = new ValidateTemplateCommand(),
+        ["demo-sweeps"] = new DemoSweepsCommand(),
     };
 
     /// <summary>Runs one command; returns its exit code.</summary>
