@@ -1,3 +1,4 @@
+using FilterQA.Core.Numerics;
 using FilterQA.Core.Sweeps;
 
 namespace FilterQA.Core.Measurement;
@@ -48,7 +49,7 @@ public static class GroupDelay
         double turned = 0, worstStep = 0;
         for (int k = lo; k < hi; k++)
         {
-            double step = PhaseUnwrap.Reduce(phase[k + 1] - phase[k]);
+            double step = PhaseUnwrap.Wrap(phase[k + 1] - phase[k]);
             turned += step;
             worstStep = Math.Max(worstStep, Math.Abs(step) / (f[k + 1] - f[k]));
         }
