@@ -66,7 +66,7 @@ public sealed class DemoSweepsCommand : ICommand
                     Sweep unit = synthesiser.Unit(part, i, defect);
                     Write(folder, unit.Source.FileName, w => TouchstoneWriter.Write(unit, w, new TouchstoneWriteOptions
                     {
-                        FrequencyUnit = TouchstoneFrequencyUnit.Hz,
+                        FrequencyUnit = FrequencyUnit.Hz,
                         DataFormat = TouchstoneDataFormat.DecibelAngle,
                         Comments = [$"synthetic demo unit of {part.PartNumber} ({part.Description}); demo data only"],
                     }));

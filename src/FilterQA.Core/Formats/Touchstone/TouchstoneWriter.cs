@@ -91,13 +91,7 @@ public static class TouchstoneWriter
     private static string Compose(Sweep sweep, NetworkData network, TouchstoneWriteOptions options)
     {
         int n = network.PortCount;
-        int pow10 = options.FrequencyUnit switch
-        {
-            TouchstoneFrequencyUnit.Hz => 0,
-            TouchstoneFrequencyUnit.KHz => 3,
-            TouchstoneFrequencyUnit.MHz => 6,
-            _ => 9,
-        };
+        int pow10 = options.FrequencyUnit.DecimalExponent();
         var text = new StringBuilder(64 + network.Grid.Count * n * n * 48);
         foreach (string comment in options.Comments)
         {

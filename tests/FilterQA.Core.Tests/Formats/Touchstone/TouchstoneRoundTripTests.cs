@@ -12,14 +12,14 @@ namespace FilterQA.Core.Tests.Formats.Touchstone;
 /// </summary>
 public sealed class TouchstoneRoundTripTests
 {
-    public static TheoryData<int, TouchstoneDataFormat, TouchstoneFrequencyUnit> Cases()
+    public static TheoryData<int, TouchstoneDataFormat, FrequencyUnit> Cases()
     {
-        var data = new TheoryData<int, TouchstoneDataFormat, TouchstoneFrequencyUnit>();
+        var data = new TheoryData<int, TouchstoneDataFormat, FrequencyUnit>();
         foreach (int n in new[] { 1, 2, 3, 4, 5 })
         {
             foreach (TouchstoneDataFormat format in Enum.GetValues<TouchstoneDataFormat>())
             {
-                foreach (TouchstoneFrequencyUnit unit in Enum.GetValues<TouchstoneFrequencyUnit>())
+                foreach (FrequencyUnit unit in Enum.GetValues<FrequencyUnit>())
                 {
                     data.Add(n, format, unit);
                 }
@@ -30,7 +30,7 @@ public sealed class TouchstoneRoundTripTests
 
     [Theory]
     [MemberData(nameof(Cases))]
-    public void Write_then_read_gives_the_same_sweep(int n, TouchstoneDataFormat format, TouchstoneFrequencyUnit unit)
+    public void Write_then_read_gives_the_same_sweep(int n, TouchstoneDataFormat format, FrequencyUnit unit)
     {
         Sweep original = RandomSweep(n, points: 40, seed: n * 100 + (int)format * 10 + (int)unit);
         var options = new TouchstoneWriteOptions { DataFormat = format, FrequencyUnit = unit, Comments = ["round trip", "second line"] };
@@ -120,7 +120,7 @@ public sealed class TouchstoneRoundTripTests
         s[0, 1, 1] = 0.75;
         Sweep sweep = Sweep.FromNetwork(NetworkData.Create(grid, s, [50.0, 50.0]), SweepSource.Of("t.s2p", SweepFormat.Touchstone1));
 
-        string text = TouchstoneWriter.WriteToString(sweep, new TouchstoneWriteOptions { FrequencyUnit = TouchstoneFrequencyUnit.GHz });
+        string text = TouchstoneWriter.WriteToString(sweep, new TouchstoneWriteOptions { FrequencyUnit = FrequencyUnit.GHz });
 
         // Touchstone 1.1: f N11 N21 N12 N22.
         Assert.Equal("# GHZ S RI R 50\n2 0.125 0 0.25 0 0.5 0 0.75 0\n", text);
