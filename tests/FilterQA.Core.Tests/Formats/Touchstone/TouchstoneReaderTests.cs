@@ -300,6 +300,6 @@ public sealed class TouchstoneReaderTests
 
         var error = Assert.Throws<SweepReadException>(() => TouchstoneReader.ReadFile(path));
 
-        Assert.Contains("cannot be read", error.Problem, StringComparison.Ordinal);
+        Assert.Contains("does not exist", error.Problem, StringComparison.Ordinal);
     }
 }
