@@ -97,6 +97,34 @@ public class CheckCommandTests
     }
 
     [Fact]
+    public void Power_traces_are_judged_after_the_thru_is_divided_out()
+    {
+        // A stepped generator read by a spectrum analyser: the unit's dBm trace minus the station's thru is its loss.
+        using var files = new CliFixture();
+        var synthesiser = new UnitSynthesiser(2544);
+        DemoPart part = DemoParts.Get(Part);
+        string thru = files.WriteDelimited(synthesiser.PowerThru(part, "IQC-1"), "thru.csv");
+        string good = files.WriteDelimited(synthesiser.PowerUnit(part, 1, "IQC-1"), "good.csv");
+        string lossy = files.WriteDelimited(synthesiser.PowerUnit(part, 2, "IQC-1", DefectKind.HighLoss), "lossy.csv");
+        (int code, string output, string error) = CliFixture.Run("check", "--template", CliFixture.ShippedTemplate(Part), good, lossy, "--thru", thru);
+        Assert.True(code == 1, error + output);
+        string[] lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.StartsWith($"{good}: go", lines[0]);
+        Assert.StartsWith($"{lossy}: no-go: loss (fail)", lines[1]);
+    }
+
+    [Fact]
+    public void A_power_trace_without_a_thru_cannot_be_used()
+    {
+        using var files = new CliFixture();
+        string power = files.WriteDelimited(new UnitSynthesiser(1).PowerUnit(DemoParts.Get(Part), 1, "IQC-1"), "unit.csv");
+        (int code, string output, string error) = CliFixture.Run("check", "--template", CliFixture.ShippedTemplate(Part), power);
+        Assert.Equal(2, code);
+        Assert.Equal("", output);
+        Assert.Contains("normalised by a thru", error);
+    }
+
+    [Fact]
     public void A_template_with_problems_gives_exit_code_2_with_every_problem()
     {
         using var files = new CliFixture();

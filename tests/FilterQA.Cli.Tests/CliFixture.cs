@@ -1,3 +1,4 @@
+using FilterQA.Core.Formats.Delimited;
 using FilterQA.Core.Formats.Touchstone;
 using FilterQA.Core.Sweeps;
 using FilterQA.Core.Synthesis;
@@ -40,6 +41,15 @@ internal sealed class CliFixture : IDisposable
         string path = Path.Combine(Folder, fileName);
         using var writer = new StreamWriter(path);
         TouchstoneWriter.Write(sweep, writer);
+        return path;
+    }
+
+    /// <summary>Writes a scalar (power or gain) sweep as delimited text and returns its path.</summary>
+    public string WriteDelimited(Sweep sweep, string fileName)
+    {
+        string path = Path.Combine(Folder, fileName);
+        using var writer = new StreamWriter(path);
+        DelimitedTextWriter.Write(sweep, writer);
         return path;
     }
 

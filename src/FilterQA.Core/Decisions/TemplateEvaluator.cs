@@ -148,7 +148,7 @@ public static class TemplateEvaluator
         if (step > need.MaximumStepHz * (1 + StepTolerance))
         {
             string where = c.Template.Device == DeviceKind.Resonator ? " near the resonance" : "";
-            problems.Add($"the step{where} is {Say.Hz(step)}, coarser than the {Say.Hz(need.MaximumStepHz)} the template allows (narrowest feature {Say.Hz(need.NarrowestFeatureHz)} / {need.PointsPerFeature} points)");
+            problems.Add($"the step{where} is {Say.Hz(step)}, coarser than the {Say.Hz(need.MaximumStepHz)} the template allows (narrowest feature {Say.Hz(need.NarrowestFeatureHz)} / {Say.N(need.PointsPerFeature)} points)");
         }
         if (c.Input.ThruAge is { } age && age > TimeSpan.FromSeconds(need.MaximumThruAgeS))
         {
