@@ -13,8 +13,8 @@ namespace FilterQA.Core.Decisions;
 /// <param name="MeasuredValue">What was measured; null when it could not be measured.</param>
 /// <param name="LimitValue">The tolerance limit on the deciding side; null when the rule could not be resolved.</param>
 /// <param name="Sense">Whether the limit is a maximum or a minimum.</param>
-/// <param name="Margin">Signed distance from the measured value to the tolerance limit: positive inside, negative outside; null when not measured.</param>
-/// <param name="GuardBand">The guard band w used (0 under simple acceptance).</param>
+/// <param name="Margin">Signed distance from the measured value to the tolerance limit: positive inside, negative outside; null when not measured or not verifiable.</param>
+/// <param name="GuardBand">The guard band w of the non-binary statement: the rule's uncertainty U (ILAC-G8:09/2019 4.2.3). Under simple acceptance a conditional pass still passes (see <see cref="UnitEvaluation.Passes"/>); under guarded acceptance TL − w is the acceptance limit.</param>
 /// <param name="Outcome">Pass, conditional pass, conditional fail, fail or not verifiable.</param>
 /// <param name="IsLowerBound">True when the measured value is only a lower bound ("at least"), e.g. a rejection limited by the noise floor.</param>
 /// <param name="AtHz">Frequency where the deciding value was found, Hz; null when not at one frequency.</param>

@@ -37,7 +37,7 @@ public sealed class DemoPart
     /// <summary>
     /// Frequencies of every synthetic sweep of this part (network and power traces alike). Uniform for the
     /// filters and the trap; segmented for the crystal resonator (dense around fs, coarser below, medium up to
-    /// fs + 520 kHz for the unwanted modes), as a network analyser's segment sweep would be.
+    /// fs + 550 kHz for the unwanted modes), as a network analyser's segment sweep would be.
     /// </summary>
     public FrequencyGrid Grid { get; }
 

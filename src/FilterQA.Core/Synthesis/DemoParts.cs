@@ -44,7 +44,7 @@ public static class DemoParts
     // ever reaching 40 dB, so the 40 dB bandwidth cannot be measured on such a unit either).
     // Ceramic resonator Q ≈ 1 500 (memory). Specified in 1.5 kohm terminations.
     private static DemoPart Ceramic455() => new("TME-CF455-15", "455 kHz ceramic IF filter", DemoPartFamily.CeramicFilter, 455e3,
-        FrequencyGrid.Linear(255e3, 655e3, 1601), 1500,
+        FrequencyGrid.Linear(255e3, 655e3, 2001), 1500,
         new BandpassDesign(7, 0.5)
         {
             CentreHz = 455e3, CentreSigmaHz = 200, BandwidthHz = 19e3, BandwidthSigmaRelative = 0.008,
@@ -59,7 +59,7 @@ public static class DemoParts
     // spurious at +70 kHz 75 dB σ 1.5 down (>= 60; defect 52) — between the skirt and the ±100 kHz
     // rejection window, so only the spurious rule sees it. Quartz Q 80 000. No centre limit: no drift defect.
     private static DemoPart CrystalFilter21M4() => new("TME-XF21M4-15", "21.4 MHz 4-pole crystal filter", DemoPartFamily.CrystalFilter, 21.4e6,
-        FrequencyGrid.Linear(21.4e6 - 1.2e6, 21.4e6 + 1.2e6, 4801), 1000,
+        FrequencyGrid.Linear(21.4e6 - 1.2e6, 21.4e6 + 1.2e6, 8001), 1000,
         new BandpassDesign(4, 0.3)
         {
             CentreHz = 21.4e6, CentreSigmaHz = 300, BandwidthHz = 15.5e3, BandwidthSigmaRelative = 0.008,
@@ -76,7 +76,7 @@ public static class DemoParts
     // Group-delay ripple from echo and feedthrough ≈ 2·a·Δτ: about 20 ns good, up to 60 ns with the defect
     // floor at its strongest (limit 60 ns). Return loss 14 dB σ 0.8 in band (>= 10).
     private static DemoPart Saw70M() => new("TME-SF70M-1M2", "70 MHz SAW IF filter", DemoPartFamily.SawFilter, 70e6,
-        FrequencyGrid.Linear(62e6, 78e6, 1601), 50,
+        FrequencyGrid.Linear(60e6, 80e6, 2001), 50,
         new BandpassDesign(5, 0.2)
         {
             LinearPhase = true,
@@ -91,7 +91,7 @@ public static class DemoParts
     // 3 dB BW ≈ 2.52 MHz (>= 2.0), ≈ 53 dB down at 157.5 MHz; IL 2.3 dB σ 0.15 (<= 3.5; defect 5.0);
     // feedthrough 55 dB σ 1.5 (>= 40 / 45; defect 32).
     private static DemoPart Saw162() => new("TME-SF162-AIS", "162.0 MHz SAW front-end filter", DemoPartFamily.SawFilter, 162e6,
-        FrequencyGrid.Linear(142e6, 182e6, 1601), 50,
+        FrequencyGrid.Linear(142e6, 190e6, 2401), 50,
         new BandpassDesign(4, 0.3)
         {
             CentreHz = 162e6, CentreSigmaHz = 30e3, BandwidthHz = 2.3e6, BandwidthSigmaRelative = 0.008,
@@ -134,8 +134,8 @@ public static class DemoParts
         });
 
     /// <summary>
-    /// Segments: fs − 150 kHz … fs − 10 kHz every 1 kHz; fs ± 10 kHz every 50 Hz; fs + 10 kHz … fs + 520 kHz
-    /// every 250 Hz (fp and the unwanted modes). Steps are whole hertz so the grid is exact.
+    /// Segments: fs − 150 kHz … fs − 10 kHz every 1 kHz; fs ± 10 kHz every 50 Hz; fs + 10 kHz … fs + 550 kHz
+    /// every 250 Hz (fp and the unwanted modes; the demo template's span reaches fs + 550 kHz). Steps are whole hertz so the grid is exact.
     /// </summary>
     private static FrequencyGrid ResonatorGrid(double nominalHz)
     {
@@ -148,7 +148,7 @@ public static class DemoParts
         {
             hz.Add(f);
         }
-        for (double f = nominalHz + 10e3; f <= nominalHz + 520e3; f += 250)
+        for (double f = nominalHz + 10e3; f <= nominalHz + 550e3; f += 250)
         {
             hz.Add(f);
         }

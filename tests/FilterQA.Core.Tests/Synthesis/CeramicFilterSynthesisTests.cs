@@ -42,7 +42,7 @@ public class CeramicFilterSynthesisTests
         {
             i++;
         }
-        Assert.Equal(hz, trace.Grid[i]); // the grid has the point itself: 255 kHz + 800 × 250 Hz = 455 kHz
+        Assert.Equal(hz, trace.Grid[i]); // the grid has the point itself: 255 kHz + 1000 × 200 Hz = 455 kHz
         return trace.LossDb[i];
     }
 

@@ -53,8 +53,8 @@ public class PowerTraceSynthesisTests
     public void Noise_floor_averages_near_minus_105_dBm()
     {
         ReadOnlySpan<double> floor = new UnitSynthesiser(4).NoiseFloor(DemoParts.Get("TME-XF21M4-15"), "IQC-2").Scalar!.LevelDb;
-        // Mean of the linear powers: the floor's mean −105 dBm (tilt ±0.5 dB averages out); 4 801 points of an
-        // 8-sample average have a relative standard error of 1/√(8·4801) = 0.5 %, so ±0.1 dB is > 4σ.
+        // Mean of the linear powers: the floor's mean −105 dBm (tilt ±0.5 dB averages out); 8 001 points of an
+        // 8-sample average have a relative standard error of 1/√(8·8001) = 0.4 %, so ±0.1 dB is > 4σ.
         double meanMw = 0;
         foreach (double dbm in floor)
         {
