@@ -12,6 +12,8 @@ public static class CliApplication
     private static readonly IReadOnlyDictionary<string, ICommand> Commands = new Dictionary<string, ICommand>(StringComparer.Ordinal)
     {
         ["measure"] = new MeasureCommand(),
+        ["check"] = new CheckCommand(),
+        ["validate-template"] = new ValidateTemplateCommand(),
         ["demo-sweeps"] = new DemoSweepsCommand(),
     };
 

@@ -26,7 +26,7 @@ public sealed class MeasureCommandTests
         {
             Assert.True(root.TryGetProperty(field, out _), $"missing {field}");
         }
-        Assert.Equal(1601, root.GetProperty("points").GetInt32());
+        Assert.Equal(2001, root.GetProperty("points").GetInt32());
         Assert.Equal(new[] { 3.0, 6.0, 40.0 }, root.GetProperty("bands").EnumerateArray().Select(b => b.GetProperty("levelDb").GetDouble()));
         JsonElement band = root.GetProperty("bands")[1];
         foreach (string field in new[] { "lowerHz", "upperHz", "bandwidthHz", "centreHz", "geometricCentreHz" })
