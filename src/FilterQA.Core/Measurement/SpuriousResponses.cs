@@ -52,47 +52,13 @@ public static class SpuriousResponses
     private static void Search(ReadOnlySpan<double> f, ReadOnlySpan<double> loss, int from, int to, double reference, double threshold,
         double minProminence, List<SpuriousResponse> found)
     {
-        int i = from + 1;
-        while (i < to - 1)
+        foreach (int peak in LocalResponses.Find(loss, from, to, minProminence))
         {
-            if (!(loss[i] < loss[i - 1]))
+            double level = loss[peak];
+            if (level - reference <= threshold)
             {
-                i++;
-                continue;
+                found.Add(new SpuriousResponse(f[peak], level, level - reference, LocalResponses.Prominence(loss, peak, from, to)));
             }
-            int j = i;
-            while (j + 1 < to && loss[j + 1] == loss[i])
-            {
-                j++;
-            }
-            if (j + 1 < to && loss[j + 1] > loss[i])
-            {
-                int peak = (i + j) / 2;
-                double level = loss[peak];
-                if (level - reference <= threshold)
-                {
-                    double prominence = Math.Min(Base(loss, i - 1, from - 1, -1, level), Base(loss, j + 1, to, +1, level)) - level;
-                    if (prominence >= minProminence)
-                    {
-                        found.Add(new SpuriousResponse(f[peak], level, level - reference, prominence));
-                    }
-                }
-            }
-            i = j + 1;
         }
-    }
-
-    private static double Base(ReadOnlySpan<double> loss, int start, int stop, int step, double level)
-    {
-        double highest = double.NegativeInfinity;
-        for (int k = start; k != stop; k += step)
-        {
-            if (loss[k] < level)
-            {
-                break;
-            }
-            highest = Math.Max(highest, loss[k]);
-        }
-        return highest;
     }
 }

@@ -54,10 +54,10 @@ public sealed class ResponseTrace
     /// <summary>Takes ownership of arrays; validates them.</summary>
     internal static ResponseTrace Own(FrequencyGrid grid, ResponsePath path, double[] lossDb, double[]? phaseRad)
     {
-        Check(grid, lossDb, "loss");
+        FiniteValues.Check(grid, lossDb, "loss");
         if (phaseRad is not null)
         {
-            Check(grid, phaseRad, "phase");
+            FiniteValues.Check(grid, phaseRad, "phase");
         }
         return new ResponseTrace(grid, path, lossDb, phaseRad);
     }
@@ -127,22 +127,5 @@ public sealed class ResponseTrace
             phase[i] = values[i].Phase;
         }
         return Own(grid, path, loss, phase);
-    }
-
-    private static void Check(FrequencyGrid grid, double[] values, string what)
-    {
-        if (values.Length != grid.Count)
-        {
-            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
-                $"{what} has {values.Length} values for {grid.Count} frequencies"));
-        }
-        for (int i = 0; i < values.Length; i++)
-        {
-            if (!double.IsFinite(values[i]))
-            {
-                throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
-                    $"{what} at index {i} is {values[i]}; values must be finite"));
-            }
-        }
     }
 }

@@ -45,28 +45,11 @@ public sealed class ScalarTrace
     /// <summary>Takes ownership of arrays built by a reader; validates them.</summary>
     internal static ScalarTrace Own(FrequencyGrid grid, ScalarQuantity quantity, double[] levelDb, double[]? phaseDeg)
     {
-        Check(grid, levelDb, "level");
+        FiniteValues.Check(grid, levelDb, "level");
         if (phaseDeg is not null)
         {
-            Check(grid, phaseDeg, "phase");
+            FiniteValues.Check(grid, phaseDeg, "phase");
         }
         return new ScalarTrace(grid, quantity, levelDb, phaseDeg);
-    }
-
-    private static void Check(FrequencyGrid grid, double[] values, string what)
-    {
-        if (values.Length != grid.Count)
-        {
-            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
-                $"{what} has {values.Length} values for {grid.Count} frequencies"));
-        }
-        for (int i = 0; i < values.Length; i++)
-        {
-            if (!double.IsFinite(values[i]))
-            {
-                throw new ArgumentException(string.Create(CultureInfo.InvariantCulture,
-                    $"{what} at index {i} is {values[i]}; values must be finite"));
-            }
-        }
     }
 }
