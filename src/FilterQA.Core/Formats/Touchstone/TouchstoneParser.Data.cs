@@ -533,7 +533,8 @@ internal ref partial struct TouchstoneParser
         int n2 = _ports * _ports;
         var hz = new double[count];
         _frequencies.AsSpan(0, count).CopyTo(hz);
-        var flat = new Complex[n2 * count];
+        // Every element is written by the transpose below, so the large array need not be zeroed first.
+        Complex[] flat = GC.AllocateUninitializedArray<Complex>(n2 * count);
         ReadOnlySpan<Complex> staging = _staging;
         for (int f = 0; f < count; f++)
         {
