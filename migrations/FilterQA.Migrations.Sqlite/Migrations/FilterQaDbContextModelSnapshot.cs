@@ -548,10 +548,6 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
-                    b.Property<string>("CanonicalText")
-                        .IsRequired()
-                        .HasColumnType("TEXT");
-
                     b.Property<string>("ContentHash")
                         .IsRequired()
                         .HasMaxLength(71)
@@ -591,6 +587,10 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("Text")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
                     b.Property<long?>("WithdrawnAt")
                         .HasColumnType("INTEGER");
 
@@ -621,6 +621,11 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasColumnType("INTEGER");
 
                     b.Property<string>("OperatorId")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("OperatorName")
                         .IsRequired()
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");

@@ -10,6 +10,7 @@ internal sealed class ThruReferenceConfiguration : IEntityTypeConfiguration<Thru
     {
         builder.ToTable("thru_references");
         builder.Property(t => t.OperatorId).HasMaxLength(200);
+        builder.Property(t => t.OperatorName).HasMaxLength(200);
         builder.ComplexProperty(t => t.Sweep, StoredSweepMapping.Map);
         builder.HasOne(t => t.Station).WithMany().HasForeignKey(t => t.StationId).OnDelete(DeleteBehavior.Restrict);
         // The screens ask for a station's latest thru.

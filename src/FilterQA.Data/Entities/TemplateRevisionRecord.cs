@@ -19,10 +19,13 @@ public sealed class TemplateRevisionRecord
 
     public TemplateStatus Status { get; set; }
 
-    /// <summary>The template's canonical text exactly as registered or released.</summary>
-    public required string CanonicalText { get; set; }
+    /// <summary>
+    /// The template text exactly as registered or released (as <c>LimitTemplateWriter.Write</c>
+    /// writes it; a released text carries its content-hash line).
+    /// </summary>
+    public required string Text { get; set; }
 
-    /// <summary>"sha256:" plus the lower-case hex SHA-256 of the UTF-8 canonical text.</summary>
+    /// <summary>"sha256:" plus the lower-case hex SHA-256 of the template's canonical text.</summary>
     public required string ContentHash { get; set; }
 
     public DecisionRule DecisionRule { get; set; }

@@ -1,5 +1,3 @@
-using FilterQA.Core.Sweeps;
-
 namespace FilterQA.Data.Entities;
 
 /// <summary>A thru (fixture without a device) measured at a station, used to normalise unit sweeps.</summary>
@@ -14,6 +12,8 @@ public sealed class ThruReferenceRecord : IAppendOnly
     public DateTimeOffset MeasuredAt { get; set; }
 
     public required string OperatorId { get; set; }
+
+    public required string OperatorName { get; set; }
 
     /// <summary>Peak-to-peak loss variation of the thru over its sweep, in dB (≥ 0).</summary>
     public double FlatnessDb { get; set; }

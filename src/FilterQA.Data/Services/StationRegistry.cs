@@ -41,6 +41,7 @@ public sealed class StationRegistry(IDbContextFactory<FilterQaDbContext> context
             StationId = station.Id,
             MeasuredAt = input.MeasuredAt,
             OperatorId = input.Operator.Id,
+            OperatorName = input.Operator.Name,
             FlatnessDb = flatness,
             Sweep = sweep,
         };

@@ -61,14 +61,14 @@ public sealed class TemplateCatalog(IDbContextFactory<FilterQaDbContext> context
             {
                 Part = part,
                 Revision = template.Revision,
-                CanonicalText = template.CanonicalText,
+                Text = LimitTemplateWriter.Write(template),
                 ContentHash = template.ContentHash,
                 RegisteredAt = now,
                 RegisteredBy = actor.Name,
             };
             context.TemplateRevisions.Add(stored);
         }
-        stored.CanonicalText = template.CanonicalText;
+        stored.Text = LimitTemplateWriter.Write(template);
         stored.ContentHash = template.ContentHash;
         stored.Status = template.Status;
         stored.DecisionRule = template.DecisionRule;
@@ -98,7 +98,7 @@ public sealed class TemplateCatalog(IDbContextFactory<FilterQaDbContext> context
         }
         DateTimeOffset now = clock.GetUtcNow();
         LimitTemplate released = Parse(stored, partNumber).Release(actor.Name, DateOnly.FromDateTime(now.UtcDateTime));
-        stored.CanonicalText = released.CanonicalText;
+        stored.Text = LimitTemplateWriter.Write(released);
         stored.ContentHash = released.ContentHash;
         stored.Status = TemplateStatus.Released;
         stored.Author = released.Author;
@@ -154,7 +154,7 @@ public sealed class TemplateCatalog(IDbContextFactory<FilterQaDbContext> context
 
     internal static LimitTemplate Parse(TemplateRevisionRecord stored, string partNumber)
     {
-        TemplateReadResult read = LimitTemplateReader.Read(stored.CanonicalText);
+        TemplateReadResult read = LimitTemplateReader.Read(stored.Text);
         if (read.Template is not { } template)
         {
             throw new InvalidDataException($"{Key(partNumber, stored.Revision)}: the stored text does not read back: "

@@ -32,7 +32,7 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                 CREATE TRIGGER template_revisions_released_fixed BEFORE UPDATE ON template_revisions
                 WHEN OLD."Status" <> 'Draft' AND (
                     NEW."PartId" IS NOT OLD."PartId" OR NEW."Revision" IS NOT OLD."Revision"
-                    OR NEW."CanonicalText" IS NOT OLD."CanonicalText" OR NEW."ContentHash" IS NOT OLD."ContentHash"
+                    OR NEW."Text" IS NOT OLD."Text" OR NEW."ContentHash" IS NOT OLD."ContentHash"
                     OR NEW."DecisionRule" IS NOT OLD."DecisionRule" OR NEW."Author" IS NOT OLD."Author"
                     OR NEW."ReleaseDate" IS NOT OLD."ReleaseDate" OR NEW."ReleasedAt" IS NOT OLD."ReleasedAt"
                     OR NEW."ReleasedBy" IS NOT OLD."ReleasedBy" OR NEW."RegisteredAt" IS NOT OLD."RegisteredAt"

@@ -44,10 +44,10 @@ namespace FilterQA.Migrations.Postgres.Migrations
                         RETURN OLD;
                     END IF;
                     IF OLD."Status" <> 'Draft' AND (
-                        ROW(NEW."PartId", NEW."Revision", NEW."CanonicalText", NEW."ContentHash", NEW."DecisionRule", NEW."Author",
+                        ROW(NEW."PartId", NEW."Revision", NEW."Text", NEW."ContentHash", NEW."DecisionRule", NEW."Author",
                             NEW."ReleaseDate", NEW."ReleasedAt", NEW."ReleasedBy", NEW."RegisteredAt", NEW."RegisteredBy")
                         IS DISTINCT FROM
-                        ROW(OLD."PartId", OLD."Revision", OLD."CanonicalText", OLD."ContentHash", OLD."DecisionRule", OLD."Author",
+                        ROW(OLD."PartId", OLD."Revision", OLD."Text", OLD."ContentHash", OLD."DecisionRule", OLD."Author",
                             OLD."ReleaseDate", OLD."ReleasedAt", OLD."ReleasedBy", OLD."RegisteredAt", OLD."RegisteredBy")
                         OR NOT (NEW."Status" = OLD."Status" OR (OLD."Status" = 'Released' AND NEW."Status" = 'Withdrawn'))) THEN
                         RAISE EXCEPTION 'template revision % is %: a released template revision cannot change (only Released -> Withdrawn is allowed)',

@@ -13,7 +13,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace FilterQA.Migrations.Postgres.Migrations
 {
     [DbContext(typeof(FilterQaDbContext))]
-    [Migration("20261201225526_StorageRuleTriggers")]
+    [Migration("20261201230029_StorageRuleTriggers")]
     partial class StorageRuleTriggers
     {
         /// <inheritdoc />
@@ -570,10 +570,6 @@ namespace FilterQA.Migrations.Postgres.Migrations
                         .HasMaxLength(200)
                         .HasColumnType("character varying(200)");
 
-                    b.Property<string>("CanonicalText")
-                        .IsRequired()
-                        .HasColumnType("text");
-
                     b.Property<string>("ContentHash")
                         .IsRequired()
                         .HasMaxLength(71)
@@ -613,6 +609,10 @@ namespace FilterQA.Migrations.Postgres.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("character varying(40)");
 
+                    b.Property<string>("Text")
+                        .IsRequired()
+                        .HasColumnType("text");
+
                     b.Property<DateTimeOffset?>("WithdrawnAt")
                         .HasColumnType("timestamp with time zone");
 
@@ -645,6 +645,11 @@ namespace FilterQA.Migrations.Postgres.Migrations
                         .HasColumnType("timestamp with time zone");
 
                     b.Property<string>("OperatorId")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.Property<string>("OperatorName")
                         .IsRequired()
                         .HasMaxLength(200)
                         .HasColumnType("character varying(200)");

@@ -12,8 +12,8 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace FilterQA.Migrations.Sqlite.Migrations
 {
     [DbContext(typeof(FilterQaDbContext))]
-    [Migration("20261201225514_StorageRuleTriggers")]
-    partial class StorageRuleTriggers
+    [Migration("20261201225954_Initial")]
+    partial class Initial
     {
         /// <inheritdoc />
         protected override void BuildTargetModel(ModelBuilder modelBuilder)
@@ -551,10 +551,6 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
-                    b.Property<string>("CanonicalText")
-                        .IsRequired()
-                        .HasColumnType("TEXT");
-
                     b.Property<string>("ContentHash")
                         .IsRequired()
                         .HasMaxLength(71)
@@ -594,6 +590,10 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("Text")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
                     b.Property<long?>("WithdrawnAt")
                         .HasColumnType("INTEGER");
 
@@ -624,6 +624,11 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasColumnType("INTEGER");
 
                     b.Property<string>("OperatorId")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("OperatorName")
                         .IsRequired()
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
