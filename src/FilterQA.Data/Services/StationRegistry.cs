@@ -1,4 +1,5 @@
 using FilterQA.Core.Sweeps;
+using FilterQA.Data.Codecs;
 using FilterQA.Data.Entities;
 using Microsoft.EntityFrameworkCore;
 
@@ -60,6 +61,16 @@ public sealed class StationRegistry(IDbContextFactory<FilterQaDbContext> context
             .OrderByDescending(t => t.MeasuredAt).ThenByDescending(t => t.Id)
             .Select(t => new ThruInfo(t.Id, station, t.MeasuredAt, t.FlatnessDb, t.Sweep.RawSha256))
             .FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+    }
+
+    /// <summary>The thru's original sweep file bytes, checked against the stored length and SHA-256.</summary>
+    public async Task<byte[]> ReadThruBytesAsync(long thruReferenceId, CancellationToken cancellationToken = default)
+    {
+        await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+        StoredSweep sweep = await context.ThruReferences.AsNoTracking().Where(t => t.Id == thruReferenceId).Select(t => t.Sweep)
+            .SingleOrDefaultAsync(cancellationToken).ConfigureAwait(false)
+            ?? throw new RecordNotFoundException(FormattableString.Invariant($"thru reference {thruReferenceId} does not exist"));
+        return SweepBytes.Decompress(sweep.RawCompressed, sweep.RawLength, sweep.RawSha256);
     }
 
     internal static double Flatness(ResponseTrace response)
