@@ -10,6 +10,8 @@ namespace FilterQA.Data.Services;
 /// <summary>Lots: creation with a sampling plan, hold, disposition, summary and statistics.</summary>
 public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, TimeProvider clock)
 {
+    private const int MaxConflictRetries = 5;
+
     /// <summary>
     /// Registers a delivery as a lot against a released template revision, with its plan made by
     /// <see cref="SamplingPlanner"/>; for MIL-STD-105E without an explicit severity, the severity
@@ -64,26 +66,21 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
     }
 
     /// <summary>Moves a lot to another released revision of its part; allowed only before its first unit is tested.</summary>
-    public async Task<LotSummary> ChangeTemplateRevisionAsync(string lotNumber, int revision, Actor actor, CancellationToken cancellationToken = default)
-    {
-        ArgumentNullException.ThrowIfNull(actor);
-        await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
-        LotRecord lot = await FindAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
-        if (lot.Counters.UnitsTested > 0 || lot.Status != LotStatus.Open)
+    public Task<LotSummary> ChangeTemplateRevisionAsync(string lotNumber, int revision, Actor actor, CancellationToken cancellationToken = default) =>
+        ChangeAsync(lotNumber, actor, async (context, lot) =>
         {
-            throw new StorageRuleException(FormattableString.Invariant(
-                $"lot {lotNumber}: the template revision is fixed once the first unit is tested ({lot.Counters.UnitsTested} tested, status {lot.Status})"));
-        }
-        TemplateRevisionRecord target = await ReleasedRevisionAsync(context, lot.Part!, revision, cancellationToken).ConfigureAwait(false);
-        int previous = lot.TemplateRevision!.Revision;
-        lot.TemplateRevisionId = target.Id;
-        lot.TemplateRevision = target;
-        lot.Version++;
-        Audit.Add(context, clock, actor, AuditAction.LotTemplateChanged, "lot", lotNumber,
-            FormattableString.Invariant($"template revision {previous} → {target.Revision}"), lot.Id);
-        await context.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
-        return Summary(lot, lot.Part!.PartNumber, target.Revision, target.ContentHash);
-    }
+            if (lot.Counters.UnitsTested > 0 || lot.Status != LotStatus.Open)
+            {
+                throw new StorageRuleException(FormattableString.Invariant(
+                    $"lot {lotNumber}: the template revision is fixed once the first unit is tested ({lot.Counters.UnitsTested} tested, status {lot.Status})"));
+            }
+            TemplateRevisionRecord target = await ReleasedRevisionAsync(context, lot.Part!, revision, cancellationToken).ConfigureAwait(false);
+            int previous = lot.TemplateRevision!.Revision;
+            lot.TemplateRevisionId = target.Id;
+            lot.TemplateRevision = target;
+            Audit.Add(context, clock, actor, AuditAction.LotTemplateChanged, "lot", lotNumber,
+                FormattableString.Invariant($"template revision {previous} → {target.Revision}"), lot.Id);
+        }, cancellationToken);
 
     /// <summary>Holds a lot: no measurement is stored until the hold is released or the lot dispositioned.</summary>
     public Task<LotSummary> HoldAsync(string lotNumber, string reason, Actor actor, CancellationToken cancellationToken = default)
@@ -285,16 +282,38 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
             lot.CreatedAt, lot.CreatedBy, lot.DispositionAt, lot.DispositionBy, lot.DispositionReason, lot.DispositionIsOverride);
     }
 
-    private async Task<LotSummary> ChangeAsync(string lotNumber, Actor actor, Action<FilterQaDbContext, LotRecord> change, CancellationToken cancellationToken)
+    private Task<LotSummary> ChangeAsync(string lotNumber, Actor actor, Action<FilterQaDbContext, LotRecord> change, CancellationToken cancellationToken) =>
+        ChangeAsync(lotNumber, actor, (context, lot) =>
+        {
+            change(context, lot);
+            return Task.CompletedTask;
+        }, cancellationToken);
+
+    private async Task<LotSummary> ChangeAsync(string lotNumber, Actor actor, Func<FilterQaDbContext, LotRecord, Task> change, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(actor);
-        await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
-        LotRecord lot = await FindAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
-        change(context, lot);
-        lot.Version++;
-        // The Version token turns a concurrent store of a unit into a conflict instead of a lost count.
-        await context.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
-        return Summary(lot, lot.Part!.PartNumber, lot.TemplateRevision!.Revision, lot.TemplateRevision.ContentHash);
+        for (int attempt = 1; ; attempt++)
+        {
+            await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+            await using var transaction = await context.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
+            // Under the same lot lock as a unit being stored, so the change is decided on the latest row.
+            await LotLock.AcquireAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
+            LotRecord lot = await FindAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
+            await change(context, lot).ConfigureAwait(false);
+            lot.Version++;
+            try
+            {
+                // The Version token still catches a writer that bypasses the lock; the change is then
+                // decided again on the fresh row (its checks included).
+                await context.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+                await transaction.CommitAsync(cancellationToken).ConfigureAwait(false);
+                return Summary(lot, lot.Part!.PartNumber, lot.TemplateRevision!.Revision, lot.TemplateRevision.ContentHash);
+            }
+            catch (DbUpdateConcurrencyException) when (attempt < MaxConflictRetries)
+            {
+                await Task.Delay(TimeSpan.FromMilliseconds(10 * attempt), clock, cancellationToken).ConfigureAwait(false);
+            }
+        }
     }
 
     private static async Task<LotRecord> FindAsync(FilterQaDbContext context, string lotNumber, CancellationToken cancellationToken) =>

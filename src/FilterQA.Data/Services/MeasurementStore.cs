@@ -75,11 +75,7 @@ public sealed class MeasurementStore(IDbContextFactory<FilterQaDbContext> contex
     {
         await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
         await using var transaction = await context.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
-        if (context.Database.IsNpgsql())
-        {
-            await context.Database.ExecuteSqlInterpolatedAsync(
-                $"SELECT 1 FROM lots WHERE \"LotNumber\" = {input.LotNumber} FOR UPDATE", cancellationToken).ConfigureAwait(false);
-        }
+        await LotLock.AcquireAsync(context, input.LotNumber, cancellationToken).ConfigureAwait(false);
         LotRecord lot = await context.Lots.Include(l => l.Part).Include(l => l.TemplateRevision)
             .SingleOrDefaultAsync(l => l.LotNumber == input.LotNumber, cancellationToken).ConfigureAwait(false)
             ?? throw new RecordNotFoundException($"lot {input.LotNumber} does not exist");

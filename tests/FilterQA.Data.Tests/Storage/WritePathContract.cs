@@ -166,4 +166,39 @@ public abstract partial class WritePathContract : ProviderTestBase
             Samples.Measurement(prepared.LotNumber, "S-1", prepared.Template, UnitVerdict.Go, "IQC-unknown", at)));
         Assert.Equal((2, 2), ((await Store.Lots.GetSummaryAsync(prepared.LotNumber)).UnitsTested, (await Store.Lots.GetSummaryAsync(prepared.LotNumber)).Measurements));
     }
+
+    [StorageFact]
+    public async Task A_hold_racing_with_writers_loses_no_count()
+    {
+        PreparedLot prepared = await Store.PrepareLotAsync(PlanRequest.FullInspection(), quantity: 30);
+        DateTimeOffset at = Store.Clock.GetUtcNow();
+        int stored = 0;
+        Task writer = Task.Run(async () =>
+        {
+            for (int i = 0; i < 30; i++)
+            {
+                try
+                {
+                    await Store.Measurements.StoreAsync(Samples.Measurement(prepared.LotNumber, $"S-{i:D2}", prepared.Template, UnitVerdict.Go, prepared.Station, at, i));
+                    Interlocked.Increment(ref stored);
+                }
+                catch (StorageRuleException)
+                {
+                    // Refused while the lot is held: nothing stored, nothing counted.
+                }
+            }
+        });
+        for (int round = 0; round < 5; round++)
+        {
+            await Store.Lots.HoldAsync(prepared.LotNumber, "count check", Samples.Engineer);
+            await Store.Lots.ReleaseHoldAsync(prepared.LotNumber, Samples.Engineer);
+        }
+        await writer;
+
+        LotSummary summary = await Store.Lots.GetSummaryAsync(prepared.LotNumber);
+        await using FilterQaDbContext context = Store.NewContext();
+        int rows = await context.Measurements.CountAsync(m => m.LotId == prepared.Lot.Id);
+        Assert.Equal((stored, stored, stored), (summary.Measurements, summary.UnitsTested, rows));
+        Assert.Equal(LotStatus.InTest, summary.Status);
+    }
 }
