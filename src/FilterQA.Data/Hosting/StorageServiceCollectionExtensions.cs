@@ -43,6 +43,7 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<StationRegistry>();
         services.AddScoped<LotService>();
         services.AddScoped<MeasurementStore>();
+        services.AddScoped<SweepIntake>();
         services.AddScoped<StorageBackup>();
         return services;
     }

@@ -50,7 +50,7 @@ public sealed class StationRegistry(IDbContextFactory<FilterQaDbContext> context
         Audit.Add(context, clock, input.Operator, AuditAction.ThruRecorded, "station", station.Name,
             FormattableString.Invariant($"thru {sweep.FileName} sha256 {sweep.RawSha256}, flatness {flatness:0.###} dB"));
         await context.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
-        return new ThruInfo(thru.Id, station.Name, thru.MeasuredAt, flatness, sweep.RawSha256);
+        return new ThruInfo(thru.Id, station.Name, thru.MeasuredAt, flatness, sweep.RawSha256, sweep.FileName);
     }
 
     /// <summary>The station's most recent thru by measurement time, or null when it has none.</summary>
@@ -59,7 +59,7 @@ public sealed class StationRegistry(IDbContextFactory<FilterQaDbContext> context
         await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
         return await context.ThruReferences.Where(t => t.Station!.Name == station)
             .OrderByDescending(t => t.MeasuredAt).ThenByDescending(t => t.Id)
-            .Select(t => new ThruInfo(t.Id, station, t.MeasuredAt, t.FlatnessDb, t.Sweep.RawSha256))
+            .Select(t => new ThruInfo(t.Id, station, t.MeasuredAt, t.FlatnessDb, t.Sweep.RawSha256, t.Sweep.FileName))
             .FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
     }
 

@@ -1,0 +1,90 @@
+using System.Globalization;
+using FilterQA.Core.Decisions;
+using FilterQA.Core.Formats;
+using FilterQA.Core.Normalisation;
+using FilterQA.Core.Sweeps;
+using FilterQA.Core.Templates;
+
+namespace FilterQA.Data.Services;
+
+/// <summary>
+/// The one path from a received sweep file to a stored, judged unit: read the file, apply the station's thru,
+/// evaluate against the lot's template revision, store the unit with its verdict in one transaction.
+/// Used by the bench, the intake API, watched folders and imports alike.
+/// </summary>
+/// <remarks>
+/// The station's latest thru applies to sweeps of its own kind: a power trace (dBm) needs a power-trace thru, a
+/// gain trace or network data a gain thru. A network-analyser sweep with no thru of its kind is taken as corrected
+/// by the analyser's own calibration; its thru age is then not known, and the evaluation says so. A power trace
+/// without a thru, or any sweep whose applicable thru is older than the template allows, is refused before anything
+/// is stored: testing waits for a new thru.
+/// </remarks>
+public sealed class SweepIntake(LotService lots, TemplateCatalog templates, StationRegistry stations, MeasurementStore store, TimeProvider clock)
+{
+    /// <summary>Reads, normalises, evaluates and stores one sweep.</summary>
+    /// <exception cref="SweepReadException">The sweep (or the station's stored thru) cannot be read or used; nothing is stored.</exception>
+    /// <exception cref="IntakeRefusedException">No usable thru, or an expired one; nothing is stored.</exception>
+    /// <exception cref="RecordNotFoundException">The lot or its template revision does not exist.</exception>
+    public async Task<IntakeResult> SubmitAsync(SweepSubmission submission, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(submission);
+        LotSummary lot = await lots.GetSummaryAsync(submission.LotNumber, cancellationToken).ConfigureAwait(false);
+        LimitTemplate template = await templates.LoadAsync(lot.PartNumber, lot.TemplateRevision, cancellationToken).ConfigureAwait(false);
+        Sweep sweep = SweepFileReader.Read(submission.SweepBytes.Span, submission.FileName);
+
+        (NormalisedResponse? normalised, ThruInfo? thru) = await ApplyThruAsync(sweep, submission.Station, template, cancellationToken).ConfigureAwait(false);
+        DateTimeOffset now = clock.GetUtcNow();
+        MeasurementInput input;
+        try
+        {
+            input = MeasurementInput.FromSweep(sweep, normalised, thru is null ? null : now - thru.MeasuredAt);
+        }
+        catch (ArgumentException e)
+        {
+            throw new SweepReadException(submission.FileName, 0, 0, $"the sweep cannot be evaluated: {e.Message}", e);
+        }
+        UnitEvaluation evaluation = TemplateEvaluator.Evaluate(template, input);
+
+        var measurement = new UnitMeasurement(lot.LotNumber, submission.Serial, submission.Station, submission.Operator, now,
+            submission.SweepBytes, sweep, input.Primary, evaluation)
+        {
+            ThruReferenceId = thru?.Id,
+            IdempotencyKey = submission.IdempotencyKey,
+            RetestReason = submission.RetestReason,
+            SamplePosition = submission.SamplePosition,
+        };
+        StoredMeasurement stored = await store.StoreAsync(measurement, cancellationToken).ConfigureAwait(false);
+        return new IntakeResult(stored, evaluation, thru);
+    }
+
+    private async Task<(NormalisedResponse?, ThruInfo?)> ApplyThruAsync(Sweep sweep, string station, LimitTemplate template, CancellationToken cancellationToken)
+    {
+        bool powerTrace = sweep.Scalar?.Quantity == ScalarQuantity.PowerDbm;
+        if (sweep.Network is { PortCount: 1 })
+        {
+            return (null, null); // a reflection measurement has no thru to divide by
+        }
+        ThruInfo? thru = await stations.LatestThruAsync(station, cancellationToken).ConfigureAwait(false);
+        if (thru is null)
+        {
+            return powerTrace
+                ? throw new IntakeRefusedException($"station {station} has no thru reference; record a thru before testing power traces")
+                : (null, null);
+        }
+        Sweep thruSweep = SweepFileReader.Read(await stations.ReadThruBytesAsync(thru.Id, cancellationToken).ConfigureAwait(false), thru.FileName);
+        bool thruIsPower = thruSweep.Scalar?.Quantity == ScalarQuantity.PowerDbm;
+        if (thruIsPower != powerTrace)
+        {
+            return powerTrace
+                ? throw new IntakeRefusedException($"the latest thru of station {station} is not a power trace; record a power-trace thru before testing power traces")
+                : (null, null);
+        }
+        double ageS = (clock.GetUtcNow() - thru.MeasuredAt).TotalSeconds;
+        if (ageS > template.Sweep.MaximumThruAgeS)
+        {
+            throw new IntakeRefusedException(string.Create(CultureInfo.InvariantCulture,
+                $"the thru of station {station} was recorded {ageS / 3600:0.0} h ago; {template.PartNumber} allows {template.Sweep.MaximumThruAgeS / 3600:0.0} h. Record a new thru before testing"));
+        }
+        return (ThruNormaliser.Normalise(sweep, thruSweep), thru);
+    }
+}
