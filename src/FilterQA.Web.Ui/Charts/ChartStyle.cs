@@ -1,4 +1,5 @@
 using Plotly.Blazor;
+using PlotLayout = Plotly.Blazor.Layout;
 using Plotly.Blazor.LayoutLib;
 
 namespace FilterQA.Web.Ui.Charts;
@@ -25,7 +26,7 @@ internal static class ChartStyle
         ScrollZoom = Plotly.Blazor.ConfigLib.ScrollZoomFlag.False,
     };
 
-    public static Layout Layout(string xTitle, string yTitle, bool reverseY) => new()
+    public static PlotLayout Layout(string xTitle, string yTitle, bool reverseY) => new()
     {
         Font = new Font { Size = 16 },
         Height = 440,

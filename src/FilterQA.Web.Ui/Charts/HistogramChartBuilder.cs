@@ -1,5 +1,6 @@
 using FilterQA.Core.Statistics;
 using Plotly.Blazor;
+using PlotLayout = Plotly.Blazor.Layout;
 using Plotly.Blazor.Traces;
 using Plotly.Blazor.Traces.ScatterLib;
 
@@ -43,7 +44,7 @@ public static class HistogramChartBuilder
         {
             data.Add(LimitLine("Upper limit", unit.From(upper), tallest, ChartStyle.UpperLimitColour, ChartStyle.UpperLimitDash));
         }
-        Layout layout = ChartStyle.Layout($"{summary.Parameter} ({unit.Symbol})", "Units", reverseY: false);
+        PlotLayout layout = ChartStyle.Layout($"{summary.Parameter} ({unit.Symbol})", "Units", reverseY: false);
         layout.Height = 320;
         return new ChartModel(data, layout, ChartStyle.Config());
     }
