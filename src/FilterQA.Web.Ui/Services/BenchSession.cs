@@ -144,8 +144,8 @@ public sealed class BenchSession(SweepIntake intake, LotService lots, TemplateCa
         }
         catch (IntakeRefusedException e)
         {
-            Blocked = e.Message;
-            return new BenchOutcome(file.FileName, serial, BenchOutcomeKind.Refused, e.Message);
+            Blocked = Words.Sentence(e.Message);
+            return new BenchOutcome(file.FileName, serial, BenchOutcomeKind.Refused, Blocked);
         }
         catch (SweepReadException e)
         {
@@ -153,7 +153,7 @@ public sealed class BenchSession(SweepIntake intake, LotService lots, TemplateCa
         }
         catch (Exception e) when (e is RecordNotFoundException or StorageRuleException)
         {
-            return new BenchOutcome(file.FileName, serial, BenchOutcomeKind.NotTaken, e.Message);
+            return new BenchOutcome(file.FileName, serial, BenchOutcomeKind.NotTaken, Words.Sentence(e.Message));
         }
     }
 

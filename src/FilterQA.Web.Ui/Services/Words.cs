@@ -49,4 +49,17 @@ public static class Words
         double.IsFinite(value) ? value.ToString(format, CultureInfo.InvariantCulture) : "—";
 
     public static string Time(DateTimeOffset at) => at.ToUniversalTime().ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
+
+    /// <summary>A service's message as a sentence: first letter upper case, a full stop at the end.</summary>
+    public static string Sentence(string message)
+    {
+        ArgumentNullException.ThrowIfNull(message);
+        string text = message.Trim();
+        if (text.Length == 0)
+        {
+            return text;
+        }
+        text = char.ToUpperInvariant(text[0]) + text[1..];
+        return text.EndsWith('.') ? text : text + ".";
+    }
 }
