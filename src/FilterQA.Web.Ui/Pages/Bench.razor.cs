@@ -87,7 +87,11 @@ public partial class Bench
         }
     }
 
-    private async Task RefreshThruAsync() => ThruStatus = await Session.ThruStatusAsync(Station).ConfigureAwait(true);
+    private async Task RefreshThruAsync()
+    {
+        ThruStatus = await Session.ThruStatusAsync(Station).ConfigureAwait(true);
+        Session.ClearBlockWhenCurrent(ThruStatus);
+    }
 
     private Task SerialEnteredAsync()
     {

@@ -53,6 +53,15 @@ public sealed class BenchSession(SweepIntake intake, LotService lots, TemplateCa
         }
     }
 
+    /// <summary>Lifts the block once the station's thru is current again (the next sweep is still checked by the intake).</summary>
+    public void ClearBlockWhenCurrent(ThruStatus? status)
+    {
+        if (status?.IsCurrent == true)
+        {
+            Blocked = null;
+        }
+    }
+
     /// <summary>The station's latest thru against the open lot's template (null when no lot is open).</summary>
     public async Task<ThruStatus?> ThruStatusAsync(string station, CancellationToken cancellationToken = default)
     {

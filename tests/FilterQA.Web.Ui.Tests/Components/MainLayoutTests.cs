@@ -1,0 +1,47 @@
+using System.Security.Claims;
+using Bunit;
+using FilterQA.Data.Accounts;
+using FilterQA.Web.Ui.Layout;
+using Microsoft.AspNetCore.Components;
+
+namespace FilterQA.Web.Ui.Tests.Components;
+
+public sealed class MainLayoutTests : BunitContext
+{
+    private IRenderedComponent<MainLayout> RenderAs(string name, params string[] roles)
+    {
+        var auth = AddAuthorization();
+        auth.SetAuthorized(name);
+        auth.SetRoles(roles);
+        auth.SetClaims(new Claim(ClaimTypes.NameIdentifier, "u-" + name));
+        return Render<MainLayout>(p => p.Add(x => x.Body, (RenderFragment)(b => b.AddContent(0, "page"))));
+    }
+
+    [Fact]
+    public void The_top_bar_shows_the_person_their_role_and_a_switch_operator_post()
+    {
+        var cut = RenderAs("S. Petrova", RoleNames.Approver);
+        Assert.Equal("S. Petrova", cut.Find(".who-name").TextContent.Trim());
+        Assert.Equal("approver", cut.Find(".who-role").TextContent.Trim());
+        var form = cut.Find("form.switch-form");
+        Assert.Equal("post", form.GetAttribute("method"));
+        Assert.Equal("account/sign-out", form.GetAttribute("action"));
+        Assert.Equal("Switch operator", cut.Find("form.switch-form button").TextContent.Trim());
+    }
+
+    [Fact]
+    public void An_operator_sees_bench_lots_and_stations_but_not_new_lot()
+    {
+        var cut = RenderAs("R. Haldane", RoleNames.Operator);
+        string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
+        Assert.Equal(["Bench", "Lots", "Stations"], links);
+    }
+
+    [Fact]
+    public void A_quality_engineer_sees_lots_and_new_lot_but_not_the_bench_or_stations()
+    {
+        var cut = RenderAs("J. Lindqvist", RoleNames.QualityEngineer);
+        string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
+        Assert.Equal(["Lots", "New lot"], links);
+    }
+}
