@@ -46,6 +46,9 @@ internal sealed class CliStorage : IDisposable
 
     public StorageOptions Settings { get; }
 
+    /// <summary>The context factory over the opened database.</summary>
+    public IDbContextFactory<FilterQaDbContext> Contexts => _contexts;
+
     public TimeProvider Clock { get; }
 
     public TemplateCatalog Catalog { get; }
@@ -92,7 +95,7 @@ internal sealed class CliStorage : IDisposable
             StorageSetup.Configure(builder, options);
             builder.UseLoggerFactory(NullLoggerFactory.Instance);
             builder.ConfigureWarnings(w => w.Ignore(RelationalEventId.PendingModelChangesWarning));
-            var contexts = new Contexts(builder.Options);
+            var contexts = new ContextFactory(builder.Options);
             using (FilterQaDbContext context = contexts.CreateDbContext())
             {
                 StorageStartup.MigrateAsync(context).GetAwaiter().GetResult();
@@ -128,7 +131,7 @@ internal sealed class CliStorage : IDisposable
         }
     }
 
-    private sealed class Contexts(DbContextOptions<FilterQaDbContext> options) : IDbContextFactory<FilterQaDbContext>
+    private sealed class ContextFactory(DbContextOptions<FilterQaDbContext> options) : IDbContextFactory<FilterQaDbContext>
     {
         public FilterQaDbContext CreateDbContext() => new(options);
     }
