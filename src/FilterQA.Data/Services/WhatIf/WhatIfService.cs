@@ -1,4 +1,3 @@
-using System.Collections.Concurrent;
 using System.Globalization;
 using System.Threading.Channels;
 using FilterQA.Core.Decisions;
