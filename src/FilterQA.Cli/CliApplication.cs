@@ -15,6 +15,10 @@ public static class CliApplication
         ["check"] = new CheckCommand(),
         ["validate-template"] = new ValidateTemplateCommand(),
         ["demo-sweeps"] = new DemoSweepsCommand(),
+        ["import"] = new ImportCommand(),
+        ["lot"] = new LotCommand(),
+        ["reevaluate"] = new ReevaluateCommand(),
+        ["backup"] = new BackupCommand(),
     };
 
     /// <summary>Runs one command; returns its exit code.</summary>

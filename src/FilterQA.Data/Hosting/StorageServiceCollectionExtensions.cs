@@ -45,6 +45,7 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<MeasurementStore>();
         services.AddScoped<SweepIntake>();
         services.AddScoped<StorageBackup>();
+        services.AddScoped<WhatIfService>();
         return services;
     }
 }

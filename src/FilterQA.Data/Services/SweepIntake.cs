@@ -1,7 +1,6 @@
 using System.Globalization;
 using FilterQA.Core.Decisions;
 using FilterQA.Core.Formats;
-using FilterQA.Core.Normalisation;
 using FilterQA.Core.Sweeps;
 using FilterQA.Core.Templates;
 
@@ -32,17 +31,10 @@ public sealed class SweepIntake(LotService lots, TemplateCatalog templates, Stat
         LimitTemplate template = await templates.LoadAsync(lot.PartNumber, lot.TemplateRevision, cancellationToken).ConfigureAwait(false);
         Sweep sweep = SweepFileReader.Read(submission.SweepBytes.Span, submission.FileName);
 
-        (NormalisedResponse? normalised, ThruInfo? thru) = await ApplyThruAsync(sweep, submission.Station, template, cancellationToken).ConfigureAwait(false);
+        // One instant for the thru's age, its expiry check and the stored measurement time, so the three agree.
         DateTimeOffset now = clock.GetUtcNow();
-        MeasurementInput input;
-        try
-        {
-            input = MeasurementInput.FromSweep(sweep, normalised, thru is null ? null : now - thru.MeasuredAt);
-        }
-        catch (ArgumentException e)
-        {
-            throw new SweepReadException(submission.FileName, 0, 0, $"the sweep cannot be evaluated: {e.Message}", e);
-        }
+        (Sweep? thruSweep, ThruInfo? thru) = await ApplicableThruAsync(sweep, submission.Station, template, now, cancellationToken).ConfigureAwait(false);
+        MeasurementInput input = EvaluationInputs.FromSweep(sweep, thruSweep, thru is null ? null : now - thru.MeasuredAt, submission.FileName);
         UnitEvaluation evaluation = TemplateEvaluator.Evaluate(template, input);
 
         var measurement = new UnitMeasurement(lot.LotNumber, submission.Serial, submission.Station, submission.Operator, now,
@@ -57,7 +49,8 @@ public sealed class SweepIntake(LotService lots, TemplateCatalog templates, Stat
         return new IntakeResult(stored, evaluation, thru);
     }
 
-    private async Task<(NormalisedResponse?, ThruInfo?)> ApplyThruAsync(Sweep sweep, string station, LimitTemplate template, CancellationToken cancellationToken)
+    private async Task<(Sweep?, ThruInfo?)> ApplicableThruAsync(Sweep sweep, string station, LimitTemplate template, DateTimeOffset now,
+        CancellationToken cancellationToken)
     {
         bool powerTrace = sweep.Scalar?.Quantity == ScalarQuantity.PowerDbm;
         if (sweep.Network is { PortCount: 1 })
@@ -79,12 +72,19 @@ public sealed class SweepIntake(LotService lots, TemplateCatalog templates, Stat
                 ? throw new IntakeRefusedException($"the latest thru of station {station} is not a power trace; record a power-trace thru before testing power traces")
                 : (null, null);
         }
-        double ageS = (clock.GetUtcNow() - thru.MeasuredAt).TotalSeconds;
+        double ageS = (now - thru.MeasuredAt).TotalSeconds;
+        if (ageS < 0)
+        {
+            // Before this check a thru dated ahead of the server clock reached the evaluation as a negative age and was
+            // reported as an unreadable sweep; the sweep is fine, the clocks disagree.
+            throw new IntakeRefusedException(string.Create(CultureInfo.InvariantCulture,
+                $"the thru of station {station} is dated {thru.MeasuredAt:u}, {-ageS / 60:0.#} min after this server's time {now:u}; check the station's clock and record the thru again"));
+        }
         if (ageS > template.Sweep.MaximumThruAgeS)
         {
             throw new IntakeRefusedException(string.Create(CultureInfo.InvariantCulture,
                 $"the thru of station {station} was recorded {ageS / 3600:0.0} h ago; {template.PartNumber} allows {template.Sweep.MaximumThruAgeS / 3600:0.0} h. Record a new thru before testing"));
         }
-        return (ThruNormaliser.Normalise(sweep, thruSweep), thru);
+        return (thruSweep, thru);
     }
 }

@@ -22,6 +22,8 @@ public sealed class TestStore : IAsyncDisposable
         Lots = new LotService(Contexts, Clock);
         Measurements = new MeasurementStore(Contexts, Clock);
         Backup = new StorageBackup(Contexts);
+        Intake = new SweepIntake(Lots, Catalog, Stations, Measurements, Clock);
+        WhatIf = new WhatIfService(Contexts);
     }
 
     public StorageOptions Storage { get; }
@@ -45,6 +47,10 @@ public sealed class TestStore : IAsyncDisposable
     public MeasurementStore Measurements { get; }
 
     public StorageBackup Backup { get; }
+
+    public SweepIntake Intake { get; }
+
+    public WhatIfService WhatIf { get; }
 
     public FilterQaDbContext NewContext() => new(Options);
 
