@@ -8,6 +8,7 @@ using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.AspNetCore.Http.Json;
 using FromQueryAttribute = Microsoft.AspNetCore.Mvc.FromQueryAttribute;
 using Microsoft.Extensions.Options;
+using Microsoft.OpenApi;
 
 namespace FilterQA.Web.Api.Intake;
 
@@ -23,7 +24,25 @@ public static class SweepEndpoints
             .WithName("PostSweep")
             .WithSummary("Store and judge one sweep of a sample unit")
             .WithDescription("The body is the sweep file (text/plain, text/csv or application/octet-stream with ?fileName=) or JSON (see the API description). The answer is the unit's verdict with every rule result and the lot's progress.")
-            .Accepts<SweepJsonBody>("application/json", "text/plain", "text/csv", "application/octet-stream")
+            // The body is read by hand (any of four content types, size-limited), so it is described here rather
+            // than by Accepts, whose content-type matching would answer other types before authorization.
+            .AddOpenApiOperationTransformer(async (operation, context, cancellationToken) =>
+            {
+                var json = new OpenApiMediaType { Schema = await context.GetOrCreateSchemaAsync(typeof(SweepJsonBody), null, cancellationToken).ConfigureAwait(false) };
+                var file = new OpenApiMediaType { Schema = new OpenApiSchema { Type = JsonSchemaType.String, Format = "binary" } };
+                operation.RequestBody = new OpenApiRequestBody
+                {
+                    Required = true,
+                    Description = "The sweep file (with ?fileName=) or a JSON sweep; see the API description.",
+                    Content = new Dictionary<string, OpenApiMediaType>
+                    {
+                        ["application/json"] = json,
+                        ["text/plain"] = file,
+                        ["text/csv"] = file,
+                        ["application/octet-stream"] = file,
+                    },
+                };
+            })
             .ProducesProblem(StatusCodes.Status401Unauthorized)
             .ProducesProblem(StatusCodes.Status403Forbidden)
             .ProducesProblem(StatusCodes.Status404NotFound)
