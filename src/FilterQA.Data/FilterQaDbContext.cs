@@ -34,6 +34,12 @@ public sealed class FilterQaDbContext : IdentityDbContext<FilterQaUser>
 
     public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
 
+    public DbSet<StationApiKeyRecord> StationApiKeys => Set<StationApiKeyRecord>();
+
+    public DbSet<IdempotencyRecord> IdempotencyRecords => Set<IdempotencyRecord>();
+
+    public DbSet<SetupStepRecord> SetupSteps => Set<SetupStepRecord>();
+
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
         StorageRules.Check(ChangeTracker);
@@ -50,6 +56,10 @@ public sealed class FilterQaDbContext : IdentityDbContext<FilterQaUser>
     {
         base.OnModelCreating(builder);
         builder.ApplyConfigurationsFromAssembly(typeof(FilterQaDbContext).Assembly);
+        // A badge names one person; accounts without a badge leave it empty.
+        builder.Entity<FilterQaUser>().Property(u => u.BadgeNumber).HasMaxLength(40);
+        builder.Entity<FilterQaUser>().Property(u => u.DisplayName).HasMaxLength(120);
+        builder.Entity<FilterQaUser>().HasIndex(u => u.BadgeNumber).IsUnique().HasFilter("\"BadgeNumber\" <> ''");
     }
 
     protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)

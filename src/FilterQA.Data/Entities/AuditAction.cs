@@ -17,4 +17,10 @@ public enum AuditAction
     LotHoldReleased,
     LotDispositioned,
     LotDispositionOverridden,
+
+    /// <summary>A station API key was made (its hash stored; the key shown once).</summary>
+    ApiKeyCreated,
+
+    /// <summary>A station API key was revoked.</summary>
+    ApiKeyRevoked,
 }
