@@ -11,5 +11,6 @@ public static class PageAssemblies
     /// <summary>Page libraries other than the host's own assembly.</summary>
     public static Assembly[] Additional { get; } =
     [
+        typeof(FilterQA.Web.Ui.UiAssembly).Assembly,
     ];
 }
