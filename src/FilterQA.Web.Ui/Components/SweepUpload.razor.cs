@@ -1,5 +1,5 @@
 using System.Globalization;
-using FilterQA.Web.Ui.Accounts;
+using FilterQA.Data.Accounts;
 using FilterQA.Web.Ui.Charts;
 using FilterQA.Web.Ui.Services;
 using Microsoft.AspNetCore.Components;
@@ -107,7 +107,7 @@ public partial class SweepUpload
             _readProblem = "Nobody is signed in; sign in before testing.";
             return;
         }
-        var actor = ActorFromUser.From((await AuthenticationState.ConfigureAwait(true)).User);
+        var actor = ActorClaims.FromClaims((await AuthenticationState.ConfigureAwait(true)).User);
         (_busy, _done, _total, _chart) = (true, 0, files.Count, null);
         StateHasChanged();
         try

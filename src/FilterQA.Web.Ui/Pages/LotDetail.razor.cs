@@ -2,7 +2,7 @@ using System.Globalization;
 using FilterQA.Core.Statistics;
 using FilterQA.Data;
 using FilterQA.Data.Services;
-using FilterQA.Web.Ui.Accounts;
+using FilterQA.Data.Accounts;
 using FilterQA.Web.Ui.Charts;
 using FilterQA.Web.Ui.Services;
 using Microsoft.AspNetCore.Components;
@@ -79,7 +79,7 @@ public partial class LotDetail
         (Problem, Done) = (null, null);
         try
         {
-            Actor actor = ActorFromUser.From((await AuthenticationState.ConfigureAwait(true)).User);
+            Actor actor = ActorClaims.FromClaims((await AuthenticationState.ConfigureAwait(true)).User);
             LotActionResult result = await action(Model, actor).ConfigureAwait(true);
             if (result.Succeeded)
             {

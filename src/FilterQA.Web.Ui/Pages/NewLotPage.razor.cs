@@ -2,7 +2,6 @@ using FilterQA.Core.Sampling;
 using FilterQA.Data;
 using FilterQA.Data.Accounts;
 using FilterQA.Data.Services;
-using FilterQA.Web.Ui.Accounts;
 using FilterQA.Web.Ui.Services;
 using Microsoft.AspNetCore.Components;
 using Microsoft.AspNetCore.Components.Authorization;
@@ -68,7 +67,7 @@ public partial class NewLotPage
         _busy = true;
         try
         {
-            Actor actor = ActorFromUser.From((await AuthenticationState.ConfigureAwait(true)).User);
+            Actor actor = ActorClaims.FromClaims((await AuthenticationState.ConfigureAwait(true)).User);
             LotSummary lot = await LotsService.CreateLotAsync(Form.ToNewLot(MayChangePlan), actor).ConfigureAwait(true);
             Navigation.NavigateTo("lots/" + Uri.EscapeDataString(lot.LotNumber));
         }

@@ -2,7 +2,7 @@ using System.Globalization;
 using FilterQA.Core.Formats;
 using FilterQA.Data;
 using FilterQA.Data.Services;
-using FilterQA.Web.Ui.Accounts;
+using FilterQA.Data.Accounts;
 using FilterQA.Web.Ui.Services;
 using Microsoft.AspNetCore.Components;
 using Microsoft.AspNetCore.Components.Authorization;
@@ -50,7 +50,7 @@ public partial class Stations
         (_busy, Problem, Done) = (true, null, null);
         try
         {
-            Actor actor = ActorFromUser.From((await AuthenticationState.ConfigureAwait(true)).User);
+            Actor actor = ActorClaims.FromClaims((await AuthenticationState.ConfigureAwait(true)).User);
             using var buffer = new MemoryStream();
             await using (Stream stream = e.File.OpenReadStream(Components.SweepUpload.MaxFileBytes))
             {

@@ -9,7 +9,7 @@ namespace FilterQA.Web.Tests.Accounts;
 
 /// <summary>
 /// Sign-in through the host's endpoints, with the antiforgery token taken from the sign-in form the way a
-/// browser gets it (the host's fallback form until the page library's /signin replaces it).
+/// browser gets it (the page library's /signin).
 /// </summary>
 public sealed class SignInTests : IDisposable
 {
@@ -29,7 +29,7 @@ public sealed class SignInTests : IDisposable
     {
         await Bench.CreatePersonAsync(_factory, "jlindqvist", RoleNames.QualityEngineer);
         HttpClient client = await Bench.SignedInAsync(_factory, "jlindqvist");
-        HttpResponseMessage page = await client.GetAsync("/");
+        HttpResponseMessage page = await client.GetAsync("/lots");
         Assert.Equal(HttpStatusCode.OK, page.StatusCode);
         Assert.Contains("Test jlindqvist", await page.Content.ReadAsStringAsync(), StringComparison.Ordinal);
     }
@@ -42,7 +42,7 @@ public sealed class SignInTests : IDisposable
         HttpResponseMessage answer = await Bench.PostSignInAsync(client, new() { ["badge"] = "1001", ["pin"] = "482913", ["returnUrl"] = "/bench" });
         Assert.Equal(HttpStatusCode.Redirect, answer.StatusCode);
         Assert.Equal("/bench", answer.Headers.Location?.OriginalString);
-        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/")).StatusCode);
+        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/lots")).StatusCode);
     }
 
     [Theory]
@@ -91,7 +91,7 @@ public sealed class SignInTests : IDisposable
         HttpResponseMessage answer = await client.PostAsync("/account/sign-in",
             new FormUrlEncodedContent(new Dictionary<string, string> { ["userName"] = "spetrova", ["password"] = Bench.Password }));
         Assert.StartsWith("/signin?error=", answer.Headers.Location!.OriginalString, StringComparison.Ordinal);
-        Assert.Equal(HttpStatusCode.Redirect, (await client.GetAsync("/")).StatusCode);
+        Assert.Equal(HttpStatusCode.Redirect, (await client.GetAsync("/lots")).StatusCode);
     }
 
     [Fact]
@@ -99,12 +99,12 @@ public sealed class SignInTests : IDisposable
     {
         await Bench.CreatePersonAsync(_factory, "rhaldane", RoleNames.Operator);
         HttpClient client = await Bench.SignedInAsync(_factory, "rhaldane");
-        string home = await client.GetStringAsync("/");
+        string home = await client.GetStringAsync("/lots");
         string token = System.Text.RegularExpressions.Regex.Match(home, "name=\"__RequestVerificationToken\" value=\"([^\"]+)\"").Groups[1].Value;
         HttpResponseMessage answer = await client.PostAsync("/account/sign-out",
             new FormUrlEncodedContent(new Dictionary<string, string> { ["__RequestVerificationToken"] = WebUtility.HtmlDecode(token) }));
         Assert.Equal("/signin", answer.Headers.Location?.OriginalString);
-        Assert.Equal(HttpStatusCode.Redirect, (await client.GetAsync("/")).StatusCode);
+        Assert.Equal(HttpStatusCode.Redirect, (await client.GetAsync("/lots")).StatusCode);
     }
 
     [Fact]
