@@ -262,6 +262,39 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
         return new LotStatistics(yield, pareto, parameters);
     }
 
+    /// <summary>
+    /// The trend of one rule's measured value across the lots of a part (and, when given, one supplier), in the
+    /// order the lots were registered: per lot the mean, Cpk (performance index from the overall s, null when the
+    /// rule has no limit) and first-pass and final yield. Lots with no unit tested or no value of that rule are
+    /// left out. Reads rule results only, lot by lot (<see cref="GetStatisticsAsync"/>), never sweeps.
+    /// </summary>
+    /// <param name="partNumber">The part.</param>
+    /// <param name="supplier">One supplier, or null for every supplier of the part.</param>
+    /// <param name="ruleId">The rule whose measured value is followed (its id in the template).</param>
+    /// <param name="maxLots">The most recent lots to include, 1 to 1000.</param>
+    /// <param name="cancellationToken">Stops the reading.</param>
+    public async Task<LotTrend> GetTrendAsync(string partNumber, string? supplier, string ruleId, int maxLots = 200,
+        CancellationToken cancellationToken = default)
+    {
+        ArgumentException.ThrowIfNullOrWhiteSpace(partNumber);
+        ArgumentException.ThrowIfNullOrWhiteSpace(ruleId);
+        ArgumentOutOfRangeException.ThrowIfLessThan(maxLots, 1);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(maxLots, 1000);
+        IReadOnlyList<LotSummary> lots = await FindLotsAsync(new LotQuery { PartNumber = partNumber, Supplier = supplier, Take = maxLots },
+            cancellationToken).ConfigureAwait(false);
+        var points = new List<LotTrendPoint>(lots.Count);
+        foreach (LotSummary lot in lots.Where(l => l.UnitsTested > 0))
+        {
+            LotStatistics statistics = await GetStatisticsAsync(lot.LotNumber, cancellationToken).ConfigureAwait(false);
+            if (statistics.Parameters.FirstOrDefault(p => p.Parameter == ruleId) is { } parameter)
+            {
+                points.Add(new LotTrendPoint(lot.LotNumber, lot.CreatedAt, parameter.Moments.Mean, parameter.Capability is { Cpk: var cpk } && double.IsFinite(cpk) ? cpk : null,
+                    statistics.Yield.FirstPassYield, statistics.Yield.FinalYield));
+            }
+        }
+        return LotTrend.Create(ruleId, points);
+    }
+
     /// <summary>The lot's plan rebuilt by the planner from its stored inputs (and checked against the stored fields).</summary>
     public async Task<SamplingPlan> GetPlanAsync(string lotNumber, CancellationToken cancellationToken = default)
     {

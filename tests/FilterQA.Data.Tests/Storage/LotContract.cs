@@ -90,6 +90,36 @@ public abstract class LotContract : ProviderTestBase
     }
 
     [StorageFact]
+    public async Task A_trend_follows_one_rule_across_the_lots_of_a_part_in_registration_order()
+    {
+        PreparedLot first = await Store.PrepareLotAsync(PlanRequest.FullInspection(), quantity: 2);
+        Store.Clock.Advance(TimeSpan.FromDays(1));
+        LotSummary second = await Store.Lots.CreateLotAsync(
+            new NewLot(Samples.UniqueLot(), first.PartNumber, null, Samples.Supplier, 2, PlanRequest.FullInspection()), Samples.Engineer);
+        int lossIndex = first.Template.Rules.Select(r => r.Id).ToList().IndexOf("loss");
+        var expectedMeans = new List<double>();
+        foreach ((string lot, int[] seeds) in new[] { (first.LotNumber, new[] { 1, 2 }), (second.LotNumber, new[] { 30, 50 }) })
+        {
+            foreach (int seed in seeds)
+            {
+                await Store.Measurements.StoreAsync(Samples.Measurement(lot, $"T-{seed}", first.Template, UnitVerdict.Go, first.Station,
+                    Store.Clock.GetUtcNow(), seed));
+            }
+            // Samples.Evaluation: a passing rule measures 10 + index + seed/100; the mean is summed here.
+            expectedMeans.Add(seeds.Average(seed => 10 + lossIndex + seed / 100.0));
+        }
+
+        LotTrend trend = await Store.Lots.GetTrendAsync(first.PartNumber, Samples.Supplier, "loss");
+
+        Assert.Equal([first.LotNumber, second.LotNumber], trend.Points.Select(p => p.LotId));
+        // 1e-12 allows for summation order.
+        Assert.Equal(expectedMeans[0], trend.Points[0].Mean, 1e-12);
+        Assert.Equal(expectedMeans[1], trend.Points[1].Mean, 1e-12);
+        Assert.All(trend.Points, p => Assert.Equal((1.0, 1.0), (p.FirstPassYield, p.FinalYield)));
+        Assert.Empty((await Store.Lots.GetTrendAsync(first.PartNumber, "Another Supplier", "loss")).Points);
+    }
+
+    [StorageFact]
     public async Task The_plan_accepts_a_complete_good_sample_and_an_override_needs_an_approver_and_a_reason()
     {
         PreparedLot prepared = await Store.PrepareLotAsync(PlanRequest.FullInspection(), quantity: 3);
