@@ -37,6 +37,9 @@ public partial class Bench
 
     private ThruStatus? ThruStatus { get; set; }
 
+    // After-render only runs once the circuit is live (never while prerendering), so this says the fields take input.
+    private bool Live { get; set; }
+
     protected override async Task OnInitializedAsync()
     {
         Stations = await StationList.ListAsync().ConfigureAwait(true);
@@ -50,6 +53,11 @@ public partial class Bench
 
     protected override async Task OnAfterRenderAsync(bool firstRender)
     {
+        if (firstRender)
+        {
+            Live = true;
+            StateHasChanged();
+        }
         if (_focusNext is { } next)
         {
             _focusNext = null;

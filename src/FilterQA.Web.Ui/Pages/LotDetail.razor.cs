@@ -43,7 +43,19 @@ public partial class LotDetail
     private string OverlayCaption => Page is null ? "" : string.Create(CultureInfo.InvariantCulture,
         $"Least and largest loss of {Page.Envelope.TraceCount} counted sweeps in {Page.Envelope.BinCount} frequency bins. {Page.MaskNote}");
 
+    // After-render only runs once the circuit is live (never while prerendering), so this says the buttons answer.
+    private bool Live { get; set; }
+
     protected override Task OnParametersSetAsync() => LoadAsync();
+
+    protected override void OnAfterRender(bool firstRender)
+    {
+        if (firstRender)
+        {
+            Live = true;
+            StateHasChanged();
+        }
+    }
 
     private async Task LoadAsync()
     {

@@ -40,6 +40,9 @@ public sealed class WebFactory : WebApplicationFactory<Program>
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         builder.UseEnvironment("Testing");
+        // Outside Development the host does not map the static web assets of the framework and the page library
+        // (blazor.web.js, the scoped CSS bundle) by itself; a browser needs them to start a circuit.
+        builder.UseStaticWebAssets();
         foreach ((string key, string? value) in _settings)
         {
             builder.UseSetting(key, value);
