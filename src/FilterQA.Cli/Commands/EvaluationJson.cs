@@ -74,16 +74,8 @@ internal static class EvaluationJson
         _ => "not-verifiable",
     };
 
-    public static string Unit(RuleUnit unit) => unit switch
-    {
-        RuleUnit.Hertz => "Hz",
-        RuleUnit.PartsPerMillion => "ppm",
-        RuleUnit.Decibel => "dB",
-        RuleUnit.Second => "s",
-        RuleUnit.Ohm => "ohm",
-        RuleUnit.Farad => "F",
-        _ => "ratio",
-    };
+    // A ratio has no symbol; the JSON names it so that the field is never empty.
+    public static string Unit(RuleUnit unit) => unit == RuleUnit.Ratio ? "ratio" : unit.Symbol();
 
     private static void Number(Utf8JsonWriter json, string name, double? value)
     {

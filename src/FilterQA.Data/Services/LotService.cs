@@ -432,14 +432,5 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
         return lower is { } lo && upper is { } hi && lo >= hi ? null : new SpecLimits(lower, upper);
     }
 
-    internal static string UnitSymbol(RuleUnit unit) => unit switch
-    {
-        RuleUnit.Hertz => "Hz",
-        RuleUnit.PartsPerMillion => "ppm",
-        RuleUnit.Decibel => "dB",
-        RuleUnit.Second => "s",
-        RuleUnit.Ohm => "ohm",
-        RuleUnit.Farad => "F",
-        _ => "",
-    };
+    internal static string UnitSymbol(RuleUnit unit) => unit.Symbol();
 }

@@ -199,6 +199,7 @@ public abstract partial class WritePathContract : ProviderTestBase
         await using FilterQaDbContext context = Store.NewContext();
         int rows = await context.Measurements.CountAsync(m => m.LotId == prepared.Lot.Id);
         Assert.Equal((stored, stored, stored), (summary.Measurements, summary.UnitsTested, rows));
-        Assert.Equal(LotStatus.InTest, summary.Status);
+        // On a loaded machine every write can fall inside a hold; the lot is then still untested.
+        Assert.Equal(stored > 0 ? LotStatus.InTest : LotStatus.Open, summary.Status);
     }
 }
