@@ -28,6 +28,8 @@ public partial class Stations
 
     private string Station { get; set; } = "";
 
+    private IReadOnlyList<string> StationNames { get; set; } = [];
+
     private string? Problem { get; set; }
 
     private string? Done { get; set; }
@@ -35,6 +37,7 @@ public partial class Stations
     protected override async Task OnInitializedAsync()
     {
         Rows = await Directory.ListAsync().ConfigureAwait(true);
+        StationNames = [.. Rows.Select(r => r.Name)];
         Station = Rows.Count > 0 ? Rows[0].Name : "";
     }
 

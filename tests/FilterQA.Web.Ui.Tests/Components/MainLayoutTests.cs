@@ -44,4 +44,13 @@ public sealed class MainLayoutTests : BunitContext
         string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
         Assert.Equal(["Lots", "New lot"], links);
     }
+
+    [Fact]
+    public void An_administrator_sees_lots_stations_and_accounts()
+    {
+        var cut = RenderAs("Administrator", RoleNames.Administrator);
+        string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
+        Assert.Equal(["Lots", "Stations", "Accounts"], links);
+        Assert.Equal("admin/accounts", cut.FindAll("nav a")[2].GetAttribute("href"));
+    }
 }
