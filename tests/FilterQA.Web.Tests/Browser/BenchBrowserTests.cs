@@ -55,7 +55,7 @@ public sealed class BenchBrowserTests
         await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "bench-verdict.png"), FullPage = true });
 
         await page.ClickAsync("form.switch-form button[type=submit]");
-        await page.WaitForURLAsync(url => url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = WaitMs });
+        await page.WaitForURLAsync(url => url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = WaitMs, WaitUntil = WaitUntilState.Commit });
         await Assertions.Expect(page.Locator("#signed-in-as")).ToHaveCountAsync(0);
 
         await SignInAsync(page, "1002", "318804");
@@ -75,6 +75,6 @@ public sealed class BenchBrowserTests
         await page.FillAsync("input[name=badge]", badge);
         await page.FillAsync("input[name=pin]", pin);
         await page.ClickAsync("button[type=submit] >> nth=0");
-        await page.WaitForURLAsync(url => !url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = WaitMs });
+        await page.WaitForURLAsync(url => !url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = WaitMs, WaitUntil = WaitUntilState.Commit });
     }
 }

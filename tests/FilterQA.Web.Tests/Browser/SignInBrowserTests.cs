@@ -20,9 +20,9 @@ public sealed class SignInBrowserTests
         await page.FillAsync("input[name=badge]", "1001");
         await page.FillAsync("input[name=pin]", "640215");
         await page.ClickAsync("button[type=submit] >> nth=0");
-        await page.WaitForURLAsync(url => !url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = 15_000 });
+        await page.WaitForURLAsync(url => !url.Contains("/signin", StringComparison.Ordinal), new() { Timeout = 30_000, WaitUntil = WaitUntilState.Commit });
         ILocator signedIn = page.Locator("#signed-in-as, [data-signed-in]");
-        await signedIn.First.WaitForAsync(new() { Timeout = 15_000 });
+        await signedIn.First.WaitForAsync(new() { Timeout = 30_000 });
         Assert.Contains("Test rhaldane", await signedIn.First.InnerTextAsync(), StringComparison.Ordinal);
         await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "signed-in.png"), FullPage = true });
     }
