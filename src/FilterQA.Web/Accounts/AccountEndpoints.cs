@@ -16,6 +16,7 @@ public static class AccountEndpoints
         RouteGroupBuilder account = endpoints.MapGroup("/account").AllowAnonymous().ExcludeFromDescription();
         account.MapPost("/sign-in", SignInAsync).DisableAntiforgery();
         account.MapPost("/sign-out", SignOutAsync).DisableAntiforgery();
+        endpoints.MapPost("/account/password", ChangePasswordAsync).RequireAuthorization().DisableAntiforgery().ExcludeFromDescription();
         return endpoints;
     }
 
@@ -41,7 +42,34 @@ public static class AccountEndpoints
         SignInOutcome outcome = badge
             ? await accounts.WithBadgeAsync(form["badge"], form["pin"]).ConfigureAwait(false)
             : await accounts.WithPasswordAsync(form["userName"], form["password"]).ConfigureAwait(false);
-        return outcome.Succeeded ? TypedResults.Redirect(LocalUrl.OrHome(returnUrl)) : Back(outcome.Error!, returnUrl);
+        if (!outcome.Succeeded)
+        {
+            return Back(outcome.Error!, returnUrl);
+        }
+        // A one-time password is replaced before anything else is done under it.
+        return outcome.MustChangePassword && !badge
+            ? TypedResults.Redirect("/password?returnUrl=" + Uri.EscapeDataString(LocalUrl.OrHome(returnUrl)))
+            : TypedResults.Redirect(LocalUrl.OrHome(returnUrl));
+    }
+
+    private static async Task<RedirectHttpResult> ChangePasswordAsync(HttpContext context, IAntiforgery antiforgery, AccountSignIn accounts)
+    {
+        if (!context.Request.HasFormContentType)
+        {
+            return TypedResults.Redirect("/password?error=" + Uri.EscapeDataString("The form was not sent as a form."));
+        }
+        IFormCollection form = await context.Request.ReadFormAsync(context.RequestAborted).ConfigureAwait(false);
+        string returnUrl = LocalUrl.OrHome(form["returnUrl"]);
+        if (!await antiforgery.IsRequestValidAsync(context).ConfigureAwait(false))
+        {
+            return TypedResults.Redirect("/password?error=" + Uri.EscapeDataString("The form had expired. Please try again.")
+                + "&returnUrl=" + Uri.EscapeDataString(returnUrl));
+        }
+        SignInOutcome outcome = await accounts.ChangePasswordAsync(context.User, form["currentPassword"], form["newPassword"], form["confirmPassword"])
+            .ConfigureAwait(false);
+        return outcome.Succeeded
+            ? TypedResults.Redirect(returnUrl)
+            : TypedResults.Redirect("/password?error=" + Uri.EscapeDataString(outcome.Error!) + "&returnUrl=" + Uri.EscapeDataString(returnUrl));
     }
 
     private static async Task<RedirectHttpResult> SignOutAsync(HttpContext context, IAntiforgery antiforgery, AccountSignIn accounts)

@@ -69,6 +69,40 @@ public sealed class AccountSignIn(UserManager<FilterQaUser> users, SignInManager
             return SignInOutcome.Failed(wrong);
         }
         await signIn.SignInAsync(user, isPersistent: false).ConfigureAwait(false);
+        return user.MustChangePassword ? SignInOutcome.Success with { MustChangePassword = true } : SignInOutcome.Success;
+    }
+
+    /// <summary>
+    /// Replaces the signed-in person's password (the current one proves it is them) and clears the
+    /// must-change flag of a one-time password; the reason is plain words for the form.
+    /// </summary>
+    public async Task<SignInOutcome> ChangePasswordAsync(System.Security.Claims.ClaimsPrincipal principal, string? current, string? replacement, string? confirmation)
+    {
+        FilterQaUser? user = await users.GetUserAsync(principal).ConfigureAwait(false);
+        if (user is null)
+        {
+            return SignInOutcome.Failed("Sign in first.");
+        }
+        if (string.IsNullOrEmpty(current) || string.IsNullOrEmpty(replacement))
+        {
+            return SignInOutcome.Failed("Give the current password and a new one.");
+        }
+        if (!string.Equals(replacement, confirmation, StringComparison.Ordinal))
+        {
+            return SignInOutcome.Failed("The new password and its repetition differ.");
+        }
+        if (string.Equals(replacement, current, StringComparison.Ordinal))
+        {
+            return SignInOutcome.Failed("The new password must differ from the current one.");
+        }
+        IdentityResult changed = await users.ChangePasswordAsync(user, current, replacement).ConfigureAwait(false);
+        if (!changed.Succeeded)
+        {
+            return SignInOutcome.Failed(string.Join(" ", changed.Errors.Select(e => e.Description)));
+        }
+        user.MustChangePassword = false;
+        await users.UpdateAsync(user).ConfigureAwait(false);
+        await signIn.RefreshSignInAsync(user).ConfigureAwait(false);
         return SignInOutcome.Success;
     }
 
