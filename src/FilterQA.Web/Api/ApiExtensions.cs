@@ -1,3 +1,4 @@
+using FilterQA.Web.Accounts;
 using FilterQA.Web.Api.Intake;
 using FilterQA.Web.Api.Keys;
 using FilterQA.Web.Api.Lots;
@@ -30,7 +31,8 @@ public static class ApiExtensions
     public static IEndpointRouteBuilder MapFilterQaApi(this IEndpointRouteBuilder endpoints)
     {
         // The document describes the API and holds no data; scripts fetch it before they have a key.
-        endpoints.MapOpenApi("/openapi/{documentName}.json").AllowAnonymous();
+        // Like every endpoint but sign-in and health, the document answers only a signed-in person or a station key.
+        endpoints.MapOpenApi("/openapi/{documentName}.json").RequireAuthorization(Policies.PersonOrStation);
         RouteGroupBuilder v1 = endpoints.MapGroup("/api/v1").WithTags("v1");
         v1.MapSweepEndpoints();
         v1.MapLotEndpoints();

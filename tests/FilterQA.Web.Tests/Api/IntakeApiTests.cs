@@ -299,7 +299,9 @@ public sealed class IntakeApiTests : IDisposable
     [Fact]
     public async Task The_openapi_document_is_served_and_lists_the_sweep_post()
     {
-        HttpResponseMessage answer = await Bench.Client(_factory).GetAsync("/openapi/v1.json");
+        Assert.NotEqual(HttpStatusCode.OK, (await Bench.Client(_factory).GetAsync("/openapi/v1.json")).StatusCode);
+        await Bench.CreatePersonAsync(_factory, "apireader", RoleNames.Operator);
+        HttpResponseMessage answer = await (await Bench.SignedInAsync(_factory, "apireader")).GetAsync("/openapi/v1.json");
         Assert.Equal(HttpStatusCode.OK, answer.StatusCode);
         using JsonDocument document = JsonDocument.Parse(await answer.Content.ReadAsStringAsync());
         JsonElement path = document.RootElement.GetProperty("paths").GetProperty("/api/v1/lots/{lotNumber}/units/{serial}/sweeps");
