@@ -41,7 +41,7 @@ internal sealed class AccountSeeder(UserManager<FilterQaUser> users, RoleManager
         }
         if (await users.FindByNameAsync(AdministratorUserName).ConfigureAwait(false) is null)
         {
-            string password = Secrets.Password();
+            string password = OneTimeSecret.Password();
             var admin = new FilterQaUser { UserName = AdministratorUserName, DisplayName = "Administrator", MustChangePassword = true };
             Check(await users.CreateAsync(admin, password).ConfigureAwait(false), "the administrator account");
             Check(await users.AddToRoleAsync(admin, RoleNames.Administrator).ConfigureAwait(false), "the administrator role");
@@ -70,7 +70,7 @@ internal sealed class AccountSeeder(UserManager<FilterQaUser> users, RoleManager
             FilterQaUser? user = await users.FindByNameAsync(person.UserName).ConfigureAwait(false);
             if (user is null && !done)
             {
-                string password = Secrets.Password(), pin = Secrets.Pin();
+                string password = OneTimeSecret.Password(), pin = OneTimeSecret.Pin();
                 user = new FilterQaUser { UserName = person.UserName, DisplayName = person.DisplayName, BadgeNumber = person.Badge, MustChangePassword = true };
                 user.PinHash = hasher.HashPassword(user, pin);
                 Check(await users.CreateAsync(user, password).ConfigureAwait(false), $"the demo account {person.UserName}");

@@ -10,18 +10,18 @@ public sealed class DataFolderTests
 {
     private static Func<string, string?> Env(string? xdg) => name => name switch
     {
-        "HOME" => "/home/inspector",
+        "HOME" => "/srv/inspector",
         "XDG_DATA_HOME" => xdg,
         _ => null,
     };
 
     [Theory]
-    [InlineData(null, null, "/home/inspector/.local/share/filterqa")]
+    [InlineData(null, null, "/srv/inspector/.local/share/filterqa")]
     [InlineData(null, "/srv/xdg", "/srv/xdg/filterqa")]
-    [InlineData(null, "relative/xdg", "/home/inspector/.local/share/filterqa")]
+    [InlineData(null, "relative/xdg", "/srv/inspector/.local/share/filterqa")]
     [InlineData("/var/lib/filterqa", "/srv/xdg", "/var/lib/filterqa")]
-    [InlineData("~/qa-data", null, "/home/inspector/qa-data")]
-    [InlineData("qa-data", null, "/home/inspector/qa-data")]
+    [InlineData("~/qa-data", null, "/srv/inspector/qa-data")]
+    [InlineData("qa-data", null, "/srv/inspector/qa-data")]
     public void The_folder_is_resolved_from_configuration_then_xdg_then_home(string? configured, string? xdg, string expected)
     {
         Assert.Equal(expected, DataFolder.Resolve(configured, Env(xdg)));

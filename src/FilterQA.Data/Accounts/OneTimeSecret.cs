@@ -1,10 +1,10 @@
 using System.Globalization;
 using System.Security.Cryptography;
 
-namespace FilterQA.Web.Ui.Services;
+namespace FilterQA.Data.Accounts;
 
-/// <summary>Random one-time passwords and PINs for accounts made on the accounts page.</summary>
-internal static class OneTimeSecret
+/// <summary>Random one-time passwords and PINs: for the accounts made at first start and on the accounts page.</summary>
+public static class OneTimeSecret
 {
     // Letters and digits that cannot be mistaken for one another when read off a screen (no I, l, O, 0, 1).
     private const string Upper = "ABCDEFGHJKLMNPQRSTUVWXYZ";
