@@ -23,4 +23,7 @@ public enum AuditAction
 
     /// <summary>A station API key was revoked.</summary>
     ApiKeyRevoked,
+
+    /// <summary>An approver signed a certificate of conformance for an accepted lot.</summary>
+    CertificateIssued,
 }

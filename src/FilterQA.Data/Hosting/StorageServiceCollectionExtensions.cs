@@ -1,4 +1,5 @@
 using FilterQA.Data.Services;
+using FilterQA.Data.Services.Certificates;
 using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
@@ -28,6 +29,7 @@ public static class StorageServiceCollectionExtensions
         }
         options.ConnectionString = section[nameof(StorageOptions.ConnectionString)];
         options.DataFolder = section[nameof(StorageOptions.DataFolder)];
+        services.TryAddSingleton(ReadCertificateOptions(configuration.GetSection(CertificateOptions.Section)));
         return services.AddFilterQaStorage(options);
     }
 
@@ -46,6 +48,34 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<SweepIntake>();
         services.AddScoped<StorageBackup>();
         services.AddScoped<WhatIfService>();
+        services.TryAddSingleton(new CertificateOptions());
+        services.AddScoped<CertificateService>();
+        services.AddScoped<Services.Exports.LotExportReader>();
         return services;
+    }
+
+    private static CertificateOptions ReadCertificateOptions(IConfigurationSection section)
+    {
+        var certificates = new CertificateOptions
+        {
+            IssuerName = section[nameof(CertificateOptions.IssuerName)],
+            PublicBaseUrl = section[nameof(CertificateOptions.PublicBaseUrl)],
+        };
+        if (section[nameof(CertificateOptions.NumberPrefix)] is { Length: > 0 } prefix)
+        {
+            certificates.NumberPrefix = prefix;
+        }
+        if (section[nameof(CertificateOptions.Statement)] is { Length: > 0 } statement)
+        {
+            certificates.Statement = statement;
+        }
+        foreach (IConfigurationSection line in section.GetSection(nameof(CertificateOptions.IssuerAddressLines)).GetChildren())
+        {
+            if (line.Value is { Length: > 0 } text)
+            {
+                certificates.IssuerAddressLines.Add(text);
+            }
+        }
+        return certificates;
     }
 }
