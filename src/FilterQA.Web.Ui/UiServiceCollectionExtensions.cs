@@ -17,6 +17,7 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<StationDirectory>();
         services.AddScoped<LotUnitsReader>();
         services.AddScoped<LotPageModel>();
+        services.AddScoped<LotDocumentsModel>();
         services.AddScoped<BenchSession>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();

@@ -5,6 +5,7 @@ using FilterQA.Data.Services;
 using FilterQA.Web.Accounts;
 using FilterQA.Web.Api;
 using FilterQA.Web.Components;
+using FilterQA.Web.Files;
 using FilterQA.Web.Setup;
 using FilterQA.Web.Watching;
 using Serilog;
@@ -34,6 +35,7 @@ public static class WebHostExtensions
         services.AddFilterQaApi(configuration);
         services.AddFilterQaSetup(configuration);
         services.AddFilterQaWatchFolders(configuration);
+        services.AddVerificationRateLimit();
         return builder;
     }
 
@@ -53,12 +55,14 @@ public static class WebHostExtensions
         app.UseRouting();
         app.UseAuthentication();
         app.UseAuthorization();
+        app.UseRateLimiter();
         app.UseAntiforgery();
 
         app.MapStaticAssets().AllowAnonymous();
         app.MapGet("/health", () => TypedResults.Ok(new HealthAnswer("ok"))).AllowAnonymous().ExcludeFromDescription();
         app.MapAccountEndpoints();
         app.MapFilterQaApi();
+        app.MapLotExportEndpoints();
         app.MapRazorComponents<App>()
             .AddInteractiveServerRenderMode()
             .AddAdditionalAssemblies(PageAssemblies.Additional);
