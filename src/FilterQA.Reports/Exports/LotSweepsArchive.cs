@@ -9,8 +9,8 @@ namespace FilterQA.Reports.Exports;
 
 /// <summary>
 /// Every stored raw sweep of a lot in one zip, written as it is read, a few sweeps at a time, to a
-/// stream that need not seek (an HTTP response), so a lot of thousands of units is never held in
-/// memory. Entries are named <c>serial/attempt-N/file</c> so retests of one unit do not collide.
+/// stream that need not seek (an HTTP response), only asynchronously, so a lot of thousands of units
+/// is never held in memory (at most one page of sweeps and one compressed entry). Entries are named <c>serial/attempt-N/file</c> so retests of one unit do not collide.
 /// </summary>
 public static class LotSweepsArchive
 {
@@ -34,23 +34,25 @@ public static class LotSweepsArchive
         await using IAsyncEnumerator<ExportSweep> sweeps = reader.SweepsAsync(lotNumber, cancellationToken).GetAsyncEnumerator(cancellationToken);
         // The first read finds the lot (or throws) before the zip writes a byte.
         bool any = await sweeps.MoveNextAsync().ConfigureAwait(false);
-        ZipArchive zip = await ZipArchive.CreateAsync(output, ZipArchiveMode.Create, leaveOpen: true, entryNameEncoding: Encoding.UTF8, cancellationToken)
-            .ConfigureAwait(false);
-        await using (zip.ConfigureAwait(false))
+        using var buffer = new ForwardBuffer();
+        using (var zip = new ZipArchive(buffer, ZipArchiveMode.Create, leaveOpen: true, entryNameEncoding: Encoding.UTF8))
         {
             while (any)
             {
                 ExportSweep sweep = sweeps.Current;
                 (string name, byte[] bytes) = format == SweepExportFormat.Csv ? AsCsv(sweep) : (EntryName(sweep, sweep.FileName), sweep.Bytes);
                 ZipArchiveEntry entry = zip.CreateEntry(name, CompressionLevel.Fastest);
-                Stream target = await entry.OpenAsync(cancellationToken).ConfigureAwait(false);
-                await using (target.ConfigureAwait(false))
+                using (Stream target = entry.Open())
                 {
-                    await target.WriteAsync(bytes, cancellationToken).ConfigureAwait(false);
+                    target.Write(bytes);
                 }
+                await buffer.DrainAsync(output, cancellationToken).ConfigureAwait(false);
                 any = await sweeps.MoveNextAsync().ConfigureAwait(false);
             }
         }
+        // Disposing the archive wrote its central directory into the buffer.
+        await buffer.DrainAsync(output, cancellationToken).ConfigureAwait(false);
+        await output.FlushAsync(cancellationToken).ConfigureAwait(false);
     }
 
     /// <summary>The entry name of a sweep: serial, attempt and file name, each made safe as one path segment.</summary>
