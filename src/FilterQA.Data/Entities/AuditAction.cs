@@ -23,4 +23,7 @@ public enum AuditAction
 
     /// <summary>A station API key was revoked.</summary>
     ApiKeyRevoked,
+
+    /// <summary>A draft template's text was saved from the editor (its new content hash recorded).</summary>
+    TemplateDraftSaved,
 }
