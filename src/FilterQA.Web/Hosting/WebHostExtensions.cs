@@ -6,6 +6,7 @@ using FilterQA.Web.Accounts;
 using FilterQA.Web.Api;
 using FilterQA.Web.Components;
 using FilterQA.Web.Setup;
+using FilterQA.Web.Templates;
 using FilterQA.Web.Watching;
 using Serilog;
 
@@ -59,6 +60,7 @@ public static class WebHostExtensions
         app.MapGet("/health", () => TypedResults.Ok(new HealthAnswer("ok"))).AllowAnonymous().ExcludeFromDescription();
         app.MapAccountEndpoints();
         app.MapFilterQaApi();
+        app.MapTemplateFileEndpoints();
         app.MapRazorComponents<App>()
             .AddInteractiveServerRenderMode()
             .AddAdditionalAssemblies(PageAssemblies.Additional);
