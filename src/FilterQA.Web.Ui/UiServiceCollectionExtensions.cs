@@ -19,6 +19,7 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<LotPageModel>();
         services.AddScoped<LotDocumentsModel>();
         services.AddScoped<BenchSession>();
+        services.AddScoped<DraftPreview>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();
         return services;

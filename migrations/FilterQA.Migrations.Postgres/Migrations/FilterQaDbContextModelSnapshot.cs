@@ -753,6 +753,19 @@ namespace FilterQA.Migrations.Postgres.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("character varying(40)");
 
+                    b.Property<DateTimeOffset?>("DraftSavedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("DraftSavedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.Property<int>("DraftVersion")
+                        .IsConcurrencyToken()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("integer")
+                        .HasDefaultValue(1);
+
                     b.Property<long>("PartId")
                         .HasColumnType("bigint");
 

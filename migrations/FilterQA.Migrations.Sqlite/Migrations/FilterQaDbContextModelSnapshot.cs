@@ -726,6 +726,19 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<long?>("DraftSavedAt")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("DraftSavedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("DraftVersion")
+                        .IsConcurrencyToken()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasDefaultValue(1);
+
                     b.Property<long>("PartId")
                         .HasColumnType("INTEGER");
 

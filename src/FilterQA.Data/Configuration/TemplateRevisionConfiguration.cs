@@ -16,6 +16,9 @@ internal sealed class TemplateRevisionConfiguration : IEntityTypeConfiguration<T
         builder.Property(r => r.RegisteredBy).HasMaxLength(200);
         builder.Property(r => r.ReleasedBy).HasMaxLength(200);
         builder.Property(r => r.WithdrawnBy).HasMaxLength(200);
+        builder.Property(r => r.DraftSavedBy).HasMaxLength(200);
+        // The token is compared in the UPDATE's WHERE clause, so two saves from the same version cannot both win.
+        builder.Property(r => r.DraftVersion).HasDefaultValue(1).IsConcurrencyToken();
         builder.HasIndex(r => new { r.PartId, r.Revision }).IsUnique();
         builder.HasIndex(r => r.ContentHash);
     }

@@ -26,4 +26,7 @@ public enum AuditAction
 
     /// <summary>An approver signed a certificate of conformance for an accepted lot.</summary>
     CertificateIssued,
+
+    /// <summary>A draft template's text was saved from the editor (its new content hash recorded).</summary>
+    TemplateDraftSaved,
 }

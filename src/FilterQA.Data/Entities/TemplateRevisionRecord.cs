@@ -45,4 +45,16 @@ public sealed class TemplateRevisionRecord
     public DateTimeOffset? WithdrawnAt { get; set; }
 
     public string? WithdrawnBy { get; set; }
+
+    /// <summary>
+    /// Optimistic concurrency token of a draft: 1 when registered, one more with every saved change of its text.
+    /// A save names the version it was edited from; a save from an older version is refused.
+    /// </summary>
+    public int DraftVersion { get; set; } = 1;
+
+    /// <summary>When the draft text was last saved (null until the first save after registering).</summary>
+    public DateTimeOffset? DraftSavedAt { get; set; }
+
+    /// <summary>Who last saved the draft text (null until the first save after registering).</summary>
+    public string? DraftSavedBy { get; set; }
 }

@@ -51,6 +51,7 @@ public static class StorageServiceCollectionExtensions
         services.TryAddSingleton(new CertificateOptions());
         services.AddScoped<CertificateService>();
         services.AddScoped<Services.Exports.LotExportReader>();
+        services.AddScoped<PreviewSamples>();
         return services;
     }
 

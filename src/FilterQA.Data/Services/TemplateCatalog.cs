@@ -7,7 +7,7 @@ using Microsoft.EntityFrameworkCore;
 namespace FilterQA.Data.Services;
 
 /// <summary>Parts, their limit-template revisions and retest policies.</summary>
-public sealed class TemplateCatalog(IDbContextFactory<FilterQaDbContext> contexts, TimeProvider clock)
+public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext> contexts, TimeProvider clock)
 {
     /// <summary>
     /// Stores a draft or released template revision (and its part, the first time). Registering
@@ -67,6 +67,13 @@ public sealed class TemplateCatalog(IDbContextFactory<FilterQaDbContext> context
                 RegisteredBy = actor.Name,
             };
             context.TemplateRevisions.Add(stored);
+        }
+        else
+        {
+            // Replacing a draft's text is a save like the editor's: later saves from the old version are refused.
+            stored.DraftVersion++;
+            stored.DraftSavedAt = now;
+            stored.DraftSavedBy = actor.Name;
         }
         stored.Text = LimitTemplateWriter.Write(template);
         stored.ContentHash = template.ContentHash;

@@ -7,6 +7,7 @@ using FilterQA.Web.Api;
 using FilterQA.Web.Components;
 using FilterQA.Web.Files;
 using FilterQA.Web.Setup;
+using FilterQA.Web.Templates;
 using FilterQA.Web.Watching;
 using Serilog;
 
@@ -63,6 +64,7 @@ public static class WebHostExtensions
         app.MapAccountEndpoints();
         app.MapFilterQaApi();
         app.MapLotExportEndpoints();
+        app.MapTemplateFileEndpoints();
         app.MapRazorComponents<App>()
             .AddInteractiveServerRenderMode()
             .AddAdditionalAssemblies(PageAssemblies.Additional);

@@ -42,7 +42,7 @@ public sealed class MainLayoutTests : BunitContext
     {
         var cut = RenderAs("J. Lindqvist", RoleNames.QualityEngineer);
         string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
-        Assert.Equal(["Lots", "New lot"], links);
+        Assert.Equal(["Lots", "New lot", "Templates"], links);
     }
 
     [Fact]
@@ -50,7 +50,7 @@ public sealed class MainLayoutTests : BunitContext
     {
         var cut = RenderAs("Administrator", RoleNames.Administrator);
         string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
-        Assert.Equal(["Lots", "Stations", "Accounts"], links);
-        Assert.Equal("admin/accounts", cut.FindAll("nav a")[2].GetAttribute("href"));
+        Assert.Equal(["Lots", "Templates", "Stations", "Accounts"], links);
+        Assert.Equal("admin/accounts", cut.FindAll("nav a")[3].GetAttribute("href"));
     }
 }
