@@ -40,6 +40,8 @@ public sealed class FilterQaDbContext : IdentityDbContext<FilterQaUser>
 
     public DbSet<SetupStepRecord> SetupSteps => Set<SetupStepRecord>();
 
+    public DbSet<ReferenceUnitRecord> ReferenceUnits => Set<ReferenceUnitRecord>();
+
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
         StorageRules.Check(ChangeTracker);

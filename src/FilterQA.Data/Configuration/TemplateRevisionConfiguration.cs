@@ -15,6 +15,7 @@ internal sealed class TemplateRevisionConfiguration : IEntityTypeConfiguration<T
         builder.Property(r => r.Author).HasMaxLength(200);
         builder.Property(r => r.RegisteredBy).HasMaxLength(200);
         builder.Property(r => r.ReleasedBy).HasMaxLength(200);
+        builder.Property(r => r.ReleaseReason).HasMaxLength(2000);
         builder.Property(r => r.WithdrawnBy).HasMaxLength(200);
         builder.HasIndex(r => new { r.PartId, r.Revision }).IsUnique();
         builder.HasIndex(r => r.ContentHash);

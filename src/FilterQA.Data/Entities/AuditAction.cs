@@ -23,4 +23,10 @@ public enum AuditAction
 
     /// <summary>A station API key was revoked.</summary>
     ApiKeyRevoked,
+
+    /// <summary>A stored measurement was marked as a reference (known-good) unit of its part.</summary>
+    ReferenceUnitAdded,
+
+    /// <summary>A reference unit was taken out of its part's reference set.</summary>
+    ReferenceUnitRemoved,
 }
