@@ -18,6 +18,7 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<LotUnitsReader>();
         services.AddScoped<LotPageModel>();
         services.AddScoped<BenchSession>();
+        services.AddScoped<TemplateRevisionList>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();
         return services;
