@@ -1,4 +1,5 @@
 using System.Globalization;
+using FilterQA.Core.Decisions;
 
 namespace FilterQA.Data.Services;
 
@@ -33,8 +34,15 @@ public sealed record ReferenceCheck(string PartNumber, int Revision, string Cont
                 return string.Create(CultureInfo.InvariantCulture, $"all {Units.Count} reference unit(s) of {PartNumber} pass revision {Revision}");
             }
             string names = string.Join("; ", failing.Select(u =>
-                $"{u.Serial} of lot {u.LotNumber} is {u.Verdict} (" + (u.FailingRules.Count == 0 ? string.Join(", ", u.Warnings) : string.Join(", ", u.FailingRules.Select(r => r.RuleId))) + ")"));
+                $"{u.Serial} of lot {u.LotNumber} is {Word(u.Verdict)} (" + (u.FailingRules.Count == 0 ? string.Join(", ", u.Warnings) : string.Join(", ", u.FailingRules.Select(r => r.RuleId))) + ")"));
             return string.Create(CultureInfo.InvariantCulture, $"{failing.Length} of {Units.Count} reference unit(s) of {PartNumber} fail revision {Revision}: {names}");
         }
     }
+
+    private static string Word(UnitVerdict verdict) => verdict switch
+    {
+        UnitVerdict.Go => "go",
+        UnitVerdict.NoGo => "no-go",
+        _ => "not verifiable",
+    };
 }
