@@ -62,6 +62,13 @@ public sealed class TemplateReleaseBrowserTests
         await Assertions.Expect(page.Locator(".done")).ToContainTextAsync("Released by Test jlindqvist", new() { Timeout = WaitMs });
         await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "release-done.png"), FullPage = true });
 
+        // The difference of the two revisions: the description changed, the rules did not.
+        await page.GotoAsync($"/templates/{Bench.Part}/diff?from=1&to=2");
+        await page.Locator(".pickers[data-interactive=yes]").WaitForAsync(new() { Timeout = WaitMs });
+        await Assertions.Expect(page.Locator("tr[data-field=description] .what")).ToHaveTextAsync("changed");
+        await Assertions.Expect(page.Locator("tr[data-rule=loss]")).ToHaveAttributeAsync("data-change", "Unchanged");
+        await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "template-diff.png"), FullPage = true });
+
         await using AsyncServiceScope scope = host.Factory.Services.CreateAsyncScope();
         TemplateCatalog catalog = scope.ServiceProvider.GetRequiredService<TemplateCatalog>();
         LimitTemplate stored = await catalog.LoadAsync(Bench.Part, 2);
@@ -69,8 +76,45 @@ public sealed class TemplateReleaseBrowserTests
         Assert.Equal("Test jlindqvist", stored.Author);
     }
 
-    /// <summary>The shipped released revision 1, a lot of two go units under it, both marked as reference units.</summary>
-    private static async Task<LimitTemplate> SeedReferenceUnitsAsync(WebFactory factory, string lotNumber)
+    [BrowserFact]
+    public async Task A_quality_engineer_adds_a_reference_unit_by_lot_and_unit_and_removes_one_with_a_note()
+    {
+        Assert.Null(BrowserHost.MissingBrowser());
+        await using BrowserHost host = await BrowserHost.StartAsync();
+        await SeedReferenceUnitsAsync(host.Factory, "VP-2611-0912", mark: 1);
+        await Bench.CreatePersonAsync(host.Factory, "jlindqvist", RoleNames.QualityEngineer, badge: "1003", pin: "730418");
+
+        IPage page = await host.Browser.NewPageAsync();
+        await BenchBrowserTests.SignInAsync(page, "1003", "730418");
+        await page.GotoAsync($"/templates/{Bench.Part}/reference-units");
+        await page.Locator("section[data-interactive=yes]").WaitForAsync(new() { Timeout = WaitMs });
+        await Assertions.Expect(page.Locator("table.reference-units tbody tr[data-serial]")).ToHaveCountAsync(1);
+
+        await page.SelectOptionAsync("#a-lot", "VP-2611-0912");
+        await Assertions.Expect(page.Locator("#a-unit option")).ToHaveCountAsync(3, new() { Timeout = WaitMs });
+        await page.SelectOptionAsync("#a-unit", new SelectOptionValue { Label = (await page.Locator("#a-unit option", new() { HasTextString = "S0002" }).InnerTextAsync()).Trim() });
+        await page.FillAsync("#a-note", "measured again on bench 2, same result");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Add the reference unit" }).ClickAsync();
+        await Assertions.Expect(page.Locator(".done")).ToContainTextAsync("S0002 of lot VP-2611-0912 is now a reference unit", new() { Timeout = WaitMs });
+        await Assertions.Expect(page.Locator("table.reference-units tbody tr[data-serial]")).ToHaveCountAsync(2);
+
+        ILocator first = page.Locator("tr[data-serial=S0001]");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Remove S0001" }).ClickAsync();
+        await Assertions.Expect(page.Locator("[role=alert]")).ToContainTextAsync("Say why S0001 is removed", new() { Timeout = WaitMs });
+        await first.Locator("input").FillAsync("connector worn");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Remove S0001" }).ClickAsync();
+        await Assertions.Expect(page.Locator(".done")).ToContainTextAsync("S0001 of lot VP-2611-0912 is no longer a reference unit", new() { Timeout = WaitMs });
+        await Assertions.Expect(first).ToHaveCountAsync(0);
+        await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "reference-units.png"), FullPage = true });
+
+        await using AsyncServiceScope scope = host.Factory.Services.CreateAsyncScope();
+        IReadOnlyList<ReferenceUnitInfo> now = await scope.ServiceProvider.GetRequiredService<ReferenceUnitService>().ListAsync(Bench.Part);
+        Assert.Equal(["S0002"], now.Select(u => u.Serial));
+        Assert.Equal("measured again on bench 2, same result", now[0].Note);
+    }
+
+    /// <summary>The shipped released revision 1, a lot of two go units under it, the first <paramref name="mark"/> marked as reference units.</summary>
+    private static async Task<LimitTemplate> SeedReferenceUnitsAsync(WebFactory factory, string lotNumber, int mark = 2)
     {
         await using AsyncServiceScope scope = factory.Services.CreateAsyncScope();
         IServiceProvider services = scope.ServiceProvider;
@@ -89,7 +133,10 @@ public sealed class TemplateReleaseBrowserTests
             byte[] bytes = Encoding.UTF8.GetBytes(Bench.UnitTouchstone(serialIndex: i));
             IntakeResult result = await intake.SubmitAsync(new SweepSubmission(lotNumber, serial, Bench.Station, operatorActor, bytes, serial + ".s2p"));
             Assert.Equal(UnitVerdict.Go, result.Evaluation.Verdict);
-            await references.AddAsync(Bench.Part, result.Stored.MeasurementId, "cross-checked on a second analyser", Bench.Engineer);
+            if (i <= mark)
+            {
+                await references.AddAsync(Bench.Part, result.Stored.MeasurementId, "cross-checked on a second analyser", Bench.Engineer);
+            }
         }
         return template;
     }
