@@ -75,6 +75,7 @@ public abstract class ReleaseContract : ProviderTestBase
             Assert.Equal(UnitVerdict.NoGo, unit.Verdict);
             Assert.Equal(lot.LotNumber, unit.LotNumber);
             RuleResult loss = Assert.Single(unit.FailingRules);
+            // The limit is the draft's own 2 dB handed back, so it compares exactly.
             Assert.Equal(("loss", RuleOutcome.Fail, TightLimitDb), (loss.RuleId, loss.Outcome, loss.LimitValue));
             // 0.01 dB below the built floor allows for the float32 compact trace and the 2001-point grid missing the
             // exact loss minimum (both far smaller than 0.01 dB).
