@@ -41,6 +41,7 @@ public sealed class FilterQaDbContext : IdentityDbContext<FilterQaUser>
     public DbSet<SetupStepRecord> SetupSteps => Set<SetupStepRecord>();
 
     public DbSet<CertificateRecord> Certificates => Set<CertificateRecord>();
+    public DbSet<ReferenceUnitRecord> ReferenceUnits => Set<ReferenceUnitRecord>();
 
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {

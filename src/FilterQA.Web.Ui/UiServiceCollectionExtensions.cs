@@ -20,6 +20,7 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<LotDocumentsModel>();
         services.AddScoped<BenchSession>();
         services.AddScoped<DraftPreview>();
+        services.AddScoped<TemplateRevisionList>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();
         return services;

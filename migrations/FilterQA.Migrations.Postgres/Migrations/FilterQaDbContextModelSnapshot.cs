@@ -552,6 +552,60 @@ namespace FilterQA.Migrations.Postgres.Migrations
                     b.ToTable("parts", (string)null);
                 });
 
+            modelBuilder.Entity("FilterQA.Data.Entities.ReferenceUnitRecord", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<DateTimeOffset>("MarkedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("MarkedBy")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.Property<string>("MarkedById")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.Property<long>("MeasurementId")
+                        .HasColumnType("bigint");
+
+                    b.Property<string>("Note")
+                        .IsRequired()
+                        .HasMaxLength(2000)
+                        .HasColumnType("character varying(2000)");
+
+                    b.Property<long>("PartId")
+                        .HasColumnType("bigint");
+
+                    b.Property<string>("RemovalNote")
+                        .HasMaxLength(2000)
+                        .HasColumnType("character varying(2000)");
+
+                    b.Property<DateTimeOffset?>("RemovedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("RemovedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("MeasurementId")
+                        .IsUnique()
+                        .HasFilter("\"RemovedAt\" IS NULL");
+
+                    b.HasIndex("PartId");
+
+                    b.ToTable("reference_units", (string)null);
+                });
+
             modelBuilder.Entity("FilterQA.Data.Entities.RuleResultRecord", b =>
                 {
                     b.Property<long>("Id")
@@ -779,6 +833,10 @@ namespace FilterQA.Migrations.Postgres.Migrations
 
                     b.Property<DateOnly?>("ReleaseDate")
                         .HasColumnType("date");
+
+                    b.Property<string>("ReleaseReason")
+                        .HasMaxLength(2000)
+                        .HasColumnType("character varying(2000)");
 
                     b.Property<DateTimeOffset?>("ReleasedAt")
                         .HasColumnType("timestamp with time zone");
@@ -1256,6 +1314,25 @@ namespace FilterQA.Migrations.Postgres.Migrations
                     b.Navigation("ThruReference");
 
                     b.Navigation("Unit");
+                });
+
+            modelBuilder.Entity("FilterQA.Data.Entities.ReferenceUnitRecord", b =>
+                {
+                    b.HasOne("FilterQA.Data.Entities.MeasurementRecord", "Measurement")
+                        .WithMany()
+                        .HasForeignKey("MeasurementId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.HasOne("FilterQA.Data.Entities.PartRecord", "Part")
+                        .WithMany()
+                        .HasForeignKey("PartId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.Navigation("Measurement");
+
+                    b.Navigation("Part");
                 });
 
             modelBuilder.Entity("FilterQA.Data.Entities.RuleResultRecord", b =>

@@ -535,6 +535,58 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                     b.ToTable("parts", (string)null);
                 });
 
+            modelBuilder.Entity("FilterQA.Data.Entities.ReferenceUnitRecord", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<long>("MarkedAt")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("MarkedBy")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("MarkedById")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long>("MeasurementId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Note")
+                        .IsRequired()
+                        .HasMaxLength(2000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long>("PartId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("RemovalNote")
+                        .HasMaxLength(2000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long?>("RemovedAt")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("RemovedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("MeasurementId")
+                        .IsUnique()
+                        .HasFilter("\"RemovedAt\" IS NULL");
+
+                    b.HasIndex("PartId");
+
+                    b.ToTable("reference_units", (string)null);
+                });
+
             modelBuilder.Entity("FilterQA.Data.Entities.RuleResultRecord", b =>
                 {
                     b.Property<long>("Id")
@@ -751,6 +803,10 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                         .HasColumnType("TEXT");
 
                     b.Property<DateOnly?>("ReleaseDate")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ReleaseReason")
+                        .HasMaxLength(2000)
                         .HasColumnType("TEXT");
 
                     b.Property<long?>("ReleasedAt")
@@ -1221,6 +1277,25 @@ namespace FilterQA.Migrations.Sqlite.Migrations
                     b.Navigation("ThruReference");
 
                     b.Navigation("Unit");
+                });
+
+            modelBuilder.Entity("FilterQA.Data.Entities.ReferenceUnitRecord", b =>
+                {
+                    b.HasOne("FilterQA.Data.Entities.MeasurementRecord", "Measurement")
+                        .WithMany()
+                        .HasForeignKey("MeasurementId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.HasOne("FilterQA.Data.Entities.PartRecord", "Part")
+                        .WithMany()
+                        .HasForeignKey("PartId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.Navigation("Measurement");
+
+                    b.Navigation("Part");
                 });
 
             modelBuilder.Entity("FilterQA.Data.Entities.RuleResultRecord", b =>

@@ -15,6 +15,7 @@ internal sealed class TemplateRevisionConfiguration : IEntityTypeConfiguration<T
         builder.Property(r => r.Author).HasMaxLength(200);
         builder.Property(r => r.RegisteredBy).HasMaxLength(200);
         builder.Property(r => r.ReleasedBy).HasMaxLength(200);
+        builder.Property(r => r.ReleaseReason).HasMaxLength(2000);
         builder.Property(r => r.WithdrawnBy).HasMaxLength(200);
         builder.Property(r => r.DraftSavedBy).HasMaxLength(200);
         // The token is compared in the UPDATE's WHERE clause, so two saves from the same version cannot both win.

@@ -29,4 +29,10 @@ public enum AuditAction
 
     /// <summary>A draft template's text was saved from the editor (its new content hash recorded).</summary>
     TemplateDraftSaved,
+
+    /// <summary>A stored measurement was marked as a reference (known-good) unit of its part.</summary>
+    ReferenceUnitAdded,
+
+    /// <summary>A reference unit was taken out of its part's reference set.</summary>
+    ReferenceUnitRemoved,
 }

@@ -42,6 +42,9 @@ public sealed class TemplateRevisionRecord
 
     public string? ReleasedBy { get; set; }
 
+    /// <summary>Why the revision was released, as the releasing quality engineer gave it (null before release and for a revision registered as released).</summary>
+    public string? ReleaseReason { get; set; }
+
     public DateTimeOffset? WithdrawnAt { get; set; }
 
     public string? WithdrawnBy { get; set; }

@@ -52,6 +52,7 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<CertificateService>();
         services.AddScoped<Services.Exports.LotExportReader>();
         services.AddScoped<PreviewSamples>();
+        services.AddScoped<ReferenceUnitService>();
         return services;
     }
 

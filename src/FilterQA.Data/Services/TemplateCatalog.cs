@@ -93,18 +93,45 @@ public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext>
         return Info(stored, part.PartNumber);
     }
 
-    /// <summary>Releases a stored draft: its text becomes the released text (author = the actor, date = today UTC) and never changes again.</summary>
-    public async Task<TemplateRevisionInfo> ReleaseAsync(string partNumber, int revision, Actor actor, CancellationToken cancellationToken = default)
+    /// <summary>
+    /// Releases a stored draft, in one transaction: the draft is judged again against every current reference unit of
+    /// the part (as <see cref="ReferenceUnitService.CheckAsync(string, int, CancellationToken)"/> does); when there is at
+    /// least one and every one is go, its text becomes the released text (author = the actor, date = today UTC), sealed
+    /// by its content hash, and never changes again; the reason is stored on the revision and in the audit entry.
+    /// A refused release stores nothing.
+    /// </summary>
+    /// <param name="partNumber">The part.</param>
+    /// <param name="revision">The draft's revision.</param>
+    /// <param name="reason">Why the revision is released (e.g. "loss limit per supplier data sheet rev C"); required.</param>
+    /// <param name="actor">The quality engineer who releases it.</param>
+    /// <param name="cancellationToken">Stops the work; nothing is stored.</param>
+    /// <exception cref="ReleaseRefusedException">No reason, no reference units, or a reference unit fails the draft;
+    /// <see cref="ReleaseRefusedException.Check"/> names the failing units and their failing rules.</exception>
+    /// <exception cref="RecordNotFoundException">The revision is not registered.</exception>
+    /// <exception cref="StorageRuleException">The revision is not a draft.</exception>
+    public async Task<TemplateRevisionInfo> ReleaseAsync(string partNumber, int revision, string reason, Actor actor, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(actor);
+        if (string.IsNullOrWhiteSpace(reason))
+        {
+            throw new ReleaseRefusedException($"{Key(partNumber, revision)} is not released: a release needs a reason");
+        }
+        reason = reason.Trim();
         await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+        await using var transaction = await context.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
         TemplateRevisionRecord stored = await FindAsync(context, partNumber, revision, cancellationToken).ConfigureAwait(false);
         if (stored.Status != TemplateStatus.Draft)
         {
             throw new StorageRuleException($"{Key(partNumber, revision)} is {stored.Status}; only a draft can be released");
         }
+        LimitTemplate draft = Parse(stored, partNumber);
+        ReferenceCheck check = await ReferenceChecker.CheckAsync(context, stored.PartId, draft, cancellationToken).ConfigureAwait(false);
+        if (!check.Passed)
+        {
+            throw new ReleaseRefusedException($"{Key(partNumber, revision)} is not released: {check.Summary}", check);
+        }
         DateTimeOffset now = clock.GetUtcNow();
-        LimitTemplate released = Parse(stored, partNumber).Release(actor.Name, DateOnly.FromDateTime(now.UtcDateTime));
+        LimitTemplate released = draft.Release(actor.Name, DateOnly.FromDateTime(now.UtcDateTime));
         stored.Text = LimitTemplateWriter.Write(released);
         stored.ContentHash = released.ContentHash;
         stored.Status = TemplateStatus.Released;
@@ -112,8 +139,11 @@ public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext>
         stored.ReleaseDate = released.ReleaseDate;
         stored.ReleasedAt = now;
         stored.ReleasedBy = actor.Name;
-        Audit.Add(context, clock, actor, AuditAction.TemplateReleased, "template", Key(partNumber, revision), $"Released {released.ContentHash}");
+        stored.ReleaseReason = reason;
+        Audit.Add(context, clock, actor, AuditAction.TemplateReleased, "template", Key(partNumber, revision),
+            $"Released {released.ContentHash}; {check.Summary}", reason: reason);
         await context.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+        await transaction.CommitAsync(cancellationToken).ConfigureAwait(false);
         return Info(stored, partNumber);
     }
 
@@ -181,5 +211,5 @@ public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext>
     internal static string Key(string partNumber, int revision) => FormattableString.Invariant($"{partNumber} revision {revision}");
 
     private static TemplateRevisionInfo Info(TemplateRevisionRecord r, string partNumber) =>
-        new(r.Id, partNumber, r.Revision, r.Status, r.ContentHash, r.Author, r.ReleaseDate, r.ReleasedBy, r.ReleasedAt);
+        new(r.Id, partNumber, r.Revision, r.Status, r.ContentHash, r.Author, r.ReleaseDate, r.ReleasedBy, r.ReleasedAt, r.ReleaseReason);
 }

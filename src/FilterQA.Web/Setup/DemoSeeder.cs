@@ -20,10 +20,11 @@ namespace FilterQA.Web.Setup;
 /// (generator and spectrum analyser, with a power thru for the 455 kHz filter), the released demo templates,
 /// and lots tested through <see cref="SweepIntake"/> with synthetic units: two pass, one fails on rejection,
 /// one on centre-frequency drift, one crystal lot has a unit whose unwanted mode is too strong, and one is
-/// half tested so the bench has work. Synthetic data for demonstrations only.
+/// half tested so the bench has work. The first two go units of each part's first lot become its reference units, so
+/// a draft of the part can be checked and released. Synthetic data for demonstrations only.
 /// </summary>
-internal sealed class DemoSeeder(TemplateCatalog templates, StationRegistry stations, LotService lots, SweepIntake intake, TimeProvider clock,
-    ILogger<DemoSeeder> log)
+internal sealed class DemoSeeder(TemplateCatalog templates, StationRegistry stations, LotService lots, SweepIntake intake,
+    ReferenceUnitService referenceUnits, TimeProvider clock, ILogger<DemoSeeder> log)
 {
     private const ulong Seed = 2611;
     private const string Customer = "Brackwater Shipyards";
@@ -77,8 +78,9 @@ internal sealed class DemoSeeder(TemplateCatalog templates, StationRegistry stat
             int tested = await SeedLotAsync(lot, synthesiser, people, engineer, approver, token).ConfigureAwait(false);
             Interlocked.Add(ref units, tested);
         }).ConfigureAwait(false);
-        log.LogInformation("Demo data loaded: {Templates} templates, {Lots} lots, {Units} units in {Seconds:0.0} s",
-            registered, Lots.Length, units, watch.Elapsed.TotalSeconds);
+        int references = await MarkReferenceUnitsAsync(engineer, cancellationToken).ConfigureAwait(false);
+        log.LogInformation("Demo data loaded: {Templates} templates, {Lots} lots, {Units} units, {References} reference units in {Seconds:0.0} s",
+            registered, Lots.Length, units, references, watch.Elapsed.TotalSeconds);
     }
 
     private async Task<int> SeedLotAsync(DemoLot lot, UnitSynthesiser synthesiser, IReadOnlyDictionary<string, FilterQaUser> people,
@@ -116,6 +118,24 @@ internal sealed class DemoSeeder(TemplateCatalog templates, StationRegistry stat
         }
         log.LogInformation("Demo lot {Lot} ({Part}): {Units} units tested in {Seconds:0.0} s", lot.LotNumber, lot.PartNumber, count, watch.Elapsed.TotalSeconds);
         return count;
+    }
+
+    /// <summary>Marks the first two go units (first attempts) of each demo part's first lot as its reference units.</summary>
+    private async Task<int> MarkReferenceUnitsAsync(Actor engineer, CancellationToken cancellationToken)
+    {
+        const int PerPart = 2;
+        int marked = 0;
+        foreach (DemoLot lot in Lots.DistinctBy(l => l.PartNumber))
+        {
+            IReadOnlyList<ReferenceCandidate> candidates = await referenceUnits.CandidatesAsync(lot.PartNumber, lot.LotNumber, cancellationToken).ConfigureAwait(false);
+            foreach (ReferenceCandidate unit in candidates.Where(c => c.Attempt == 1 && c.Verdict == FilterQA.Core.Decisions.UnitVerdict.Go).Take(PerPart))
+            {
+                await referenceUnits.AddAsync(lot.PartNumber, unit.MeasurementId, "demo: known-good unit, cross-checked on a second analyser", engineer,
+                    cancellationToken).ConfigureAwait(false);
+                marked++;
+            }
+        }
+        return marked;
     }
 
     private async Task RecordThruAsync(string station, (byte[] Bytes, string FileName) file, Actor actor, CancellationToken cancellationToken)

@@ -24,6 +24,7 @@ public sealed class TestStore : IAsyncDisposable
         Backup = new StorageBackup(Contexts);
         Intake = new SweepIntake(Lots, Catalog, Stations, Measurements, Clock);
         WhatIf = new WhatIfService(Contexts);
+        ReferenceUnits = new ReferenceUnitService(Contexts, Clock);
     }
 
     public StorageOptions Storage { get; }
@@ -51,6 +52,8 @@ public sealed class TestStore : IAsyncDisposable
     public SweepIntake Intake { get; }
 
     public WhatIfService WhatIf { get; }
+
+    public ReferenceUnitService ReferenceUnits { get; }
 
     public FilterQaDbContext NewContext() => new(Options);
 

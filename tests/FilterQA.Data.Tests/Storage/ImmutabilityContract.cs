@@ -192,26 +192,30 @@ public abstract class ImmutabilityContract : ProviderTestBase
     [StorageFact]
     public async Task A_draft_can_be_replaced_then_is_released_once_with_an_audit_entry()
     {
-        string part = Samples.UniquePart();
-        TemplateRevisionInfo draft = await Store.Catalog.RegisterAsync(Samples.Draft(part, 1), Samples.Engineer);
-        TemplateRevisionInfo redrafted = await Store.Catalog.RegisterAsync(Samples.Draft(part, 1, "455 kHz ceramic IF filter, second draft"), Samples.Engineer);
+        // A draft is released only against reference units, which are stored measurements: revision 1 is released,
+        // a lot is tested under it, and revision 2 is the draft.
+        PreparedLot lot = await ReferenceLots.StoreAsync(Store, 2);
+        await ReferenceLots.MarkAsync(Store, lot, "S0001");
+        string part = lot.PartNumber;
+        TemplateRevisionInfo draft = await Store.Catalog.RegisterAsync(Samples.Draft(part, 2), Samples.Engineer);
+        TemplateRevisionInfo redrafted = await Store.Catalog.RegisterAsync(Samples.Draft(part, 2, "455 kHz ceramic IF filter, second draft"), Samples.Engineer);
         Assert.Equal(draft.Id, redrafted.Id);
         Assert.NotEqual(draft.ContentHash, redrafted.ContentHash);
         await Assert.ThrowsAsync<StorageRuleException>(() => Store.Lots.CreateLotAsync(
-            new NewLot(Samples.UniqueLot(), part, 1, Samples.Supplier, 10, PlanRequest.FullInspection()), Samples.Engineer));
+            new NewLot(Samples.UniqueLot(), part, 2, Samples.Supplier, 10, PlanRequest.FullInspection()), Samples.Engineer));
 
-        TemplateRevisionInfo released = await Store.Catalog.ReleaseAsync(part, 1, Samples.Engineer);
+        TemplateRevisionInfo released = await Store.Catalog.ReleaseAsync(part, 2, "description corrected", Samples.Engineer);
 
         // The released text is the draft released by the engineer on the clock's date (2026-11-03 UTC).
-        LimitTemplate expected = Samples.Draft(part, 1, "455 kHz ceramic IF filter, second draft").Release(Samples.Engineer.Name, new DateOnly(2026, 11, 3));
+        LimitTemplate expected = Samples.Draft(part, 2, "455 kHz ceramic IF filter, second draft").Release(Samples.Engineer.Name, new DateOnly(2026, 11, 3));
         Assert.Equal(TemplateStatus.Released, released.Status);
         Assert.Equal(expected.ContentHash, released.ContentHash);
         Assert.Equal(Store.Clock.GetUtcNow(), released.ReleasedAt);
-        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Catalog.ReleaseAsync(part, 1, Samples.Engineer));
-        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Catalog.RegisterAsync(Samples.Draft(part, 1, "late change"), Samples.Engineer));
+        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Catalog.ReleaseAsync(part, 2, "again", Samples.Engineer));
+        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Catalog.RegisterAsync(Samples.Draft(part, 2, "late change"), Samples.Engineer));
 
         await using FilterQaDbContext context = Store.NewContext();
-        string key = $"{part} revision 1";
+        string key = $"{part} revision 2";
         AuditAction[] actions = await context.AuditEntries.AsNoTracking().Where(a => a.SubjectKey == key).OrderBy(a => a.Id).Select(a => a.Action).ToArrayAsync();
         Assert.Equal([AuditAction.TemplateRegistered, AuditAction.TemplateRegistered, AuditAction.TemplateReleased], actions);
     }

@@ -68,6 +68,18 @@ public sealed partial class FirstStartTests
             LotSummary open = await lots.GetSummaryAsync("QQ-2611-0020");
             Assert.Equal(LotStatus.InTest, open.Status);
             Assert.True(open.UnitsTested < open.Plan.SampleSize);
+
+            // Each part with a lot gets two reference units from its first lot, and its released revision 1 passes them
+            // (the units were judged go under that same revision at the intake), so a draft of it can be checked.
+            ReferenceUnitService references = scope.ServiceProvider.GetRequiredService<ReferenceUnitService>();
+            foreach (string part in new[] { "TME-CF455-15", "TME-SF70M-1M2", "TME-SF162-AIS", "TME-XR24M-18", "TME-XF21M4-15" })
+            {
+                IReadOnlyList<ReferenceUnitInfo> marked = await references.ListAsync(part);
+                Assert.Equal(2, marked.Count);
+                ReferenceCheck check = await references.CheckAsync(part, 1);
+                Assert.True(check.Passed, check.Summary);
+            }
+            Assert.Empty(await references.ListAsync("TME-LC92-TRAP"));
         }
         using (var second = new WebFactory(data.Path, settings))
         {
