@@ -46,6 +46,7 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<SweepIntake>();
         services.AddScoped<StorageBackup>();
         services.AddScoped<WhatIfService>();
+        services.AddScoped<AuditLog>();
         return services;
     }
 }
