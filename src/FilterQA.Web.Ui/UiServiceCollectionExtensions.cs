@@ -18,6 +18,10 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<LotUnitsReader>();
         services.AddScoped<LotPageModel>();
         services.AddScoped<BenchSession>();
+        services.AddScoped<RevisionDirectory>();
+        services.AddScoped<IWhatIfEngine, WhatIfEngine>();
+        services.AddScoped<WhatIfRunner>();
+        services.AddScoped<TrendPageModel>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();
         return services;

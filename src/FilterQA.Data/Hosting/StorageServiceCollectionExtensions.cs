@@ -47,6 +47,7 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<StorageBackup>();
         services.AddScoped<WhatIfService>();
         services.AddScoped<AuditLog>();
+        services.AddScoped<WhatIfUnitReader>();
         return services;
     }
 }
