@@ -56,6 +56,20 @@ public sealed class WhatIfBrowserTests
         await Assertions.Expect(chart.Locator(".legend")).ToContainTextAsync("draft rev 2", new() { Timeout = WaitMs });
         await Assertions.Expect(chart.Locator(".legend")).ToContainTextAsync("recorded rev 1", new() { Timeout = WaitMs });
         await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "whatif-page.png"), FullPage = true });
+
+        // The same engineer's trends of the part over the demo lots: the yield chart and the first rule's X-bar, S and Ppk charts.
+        await page.GotoAsync($"/trends?part={Part}");
+        await Assertions.Expect(page.Locator("table.trend-lots tbody tr")).ToHaveCountAsync(2, new() { Timeout = WaitMs });
+        await Assertions.Expect(page.Locator("article.parameter-trend .js-plotly-plot svg.main-svg")).Not.ToHaveCountAsync(0, new() { Timeout = WaitMs });
+        Assert.True(await page.Locator("ul.signals li").CountAsync() > 0, "the control chart says in words which lots are out of control, or that none is");
+        await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "trends-page.png"), FullPage = true });
+
+        // And the audit log, newest first: the draft registered above is the latest entry of the demo data.
+        await page.GotoAsync("/audit");
+        ILocator first = page.Locator("table.audit-entries tbody tr").First;
+        await first.WaitForAsync(new() { Timeout = WaitMs });
+        Assert.Equal("TemplateRegistered", await first.GetAttributeAsync("data-action"));
+        await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "audit-page.png"), FullPage = true });
     }
 
     /// <summary>
