@@ -20,7 +20,10 @@ public static class UiServiceCollectionExtensions
         services.AddScoped<LotDocumentsModel>();
         services.AddScoped<BenchSession>();
         services.AddScoped<DraftPreview>();
-        services.AddScoped<TemplateRevisionList>();
+        services.AddScoped<RevisionDirectory>();
+        services.AddScoped<IWhatIfEngine, WhatIfEngine>();
+        services.AddScoped<WhatIfRunner>();
+        services.AddScoped<TrendPageModel>();
         // Needs the host's Identity services (UserManager); only the administrator's accounts page asks for it.
         services.AddScoped<AccountDirectory>();
         return services;

@@ -53,6 +53,8 @@ public static class StorageServiceCollectionExtensions
         services.AddScoped<Services.Exports.LotExportReader>();
         services.AddScoped<PreviewSamples>();
         services.AddScoped<ReferenceUnitService>();
+        services.AddScoped<AuditLog>();
+        services.AddScoped<WhatIfUnitReader>();
         return services;
     }
 

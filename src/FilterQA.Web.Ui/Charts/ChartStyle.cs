@@ -13,6 +13,15 @@ internal static class ChartStyle
     public const string LowerLimitColour = "#8a5a00";
     public const string BarColour = "#4a6f8a";
 
+    // A second set of limits (the recorded revision beside a draft) is grey and dash-dot, so it reads as the older one.
+    public const string RecordedLimitColour = "#6b6b6b";
+    public const string RecordedLimitDash = "dashdot";
+
+    // Control charts: centre and control limits apart from the specification limits (which use the limit colours).
+    public const string CentreLineColour = "#2e7d32";
+    public const string ControlLimitColour = "#6a1b9a";
+    public const string SignalColour = "#b3261e";
+
     // Upper and lower boundaries differ in dash pattern as well as colour, so they read without colour.
     public const string UpperLimitDash = "dash";
     public const string LowerLimitDash = "dot";

@@ -19,7 +19,7 @@ public partial class TemplateDiffPage
     private TemplateCatalog Catalog { get; set; } = null!;
 
     [Inject]
-    private TemplateRevisionList RevisionList { get; set; } = null!;
+    private RevisionDirectory RevisionList { get; set; } = null!;
 
     [Inject]
     private NavigationManager Navigation { get; set; } = null!;
@@ -54,7 +54,7 @@ public partial class TemplateDiffPage
         Difference = null;
         try
         {
-            Revisions = await RevisionList.ListAsync(PartNumber).ConfigureAwait(true);
+            Revisions = (await RevisionList.RevisionsAsync(PartNumber).ConfigureAwait(true)).OrderBy(r => r.Revision).ToArray();
             if (Revisions.Count == 0)
             {
                 Problem = $"{PartNumber} has no stored template revisions.";

@@ -2,9 +2,9 @@ using FilterQA.Core.Templates;
 
 namespace FilterQA.Web.Ui.Services;
 
-/// <summary>A stored revision of a part, as a picker lists it.</summary>
-public sealed record RevisionChoice(int Revision, TemplateStatus Status)
+/// <summary>A stored template revision offered for a what-if.</summary>
+public sealed record RevisionChoice(int Revision, TemplateStatus Status, DateTimeOffset RegisteredAt, string RegisteredBy)
 {
-    /// <summary>"3 (draft)" and so on.</summary>
-    public string Label => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{Revision} ({Status.ToString().ToLowerInvariant()})");
+    /// <summary>"revision 3 (draft, registered 2026-11-03 by J. Lindqvist)".</summary>
+    public string Label => $"revision {Revision} ({Status.ToString().ToLowerInvariant()}, registered {Words.Time(RegisteredAt)} by {RegisteredBy})";
 }

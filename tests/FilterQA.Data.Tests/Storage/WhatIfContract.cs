@@ -163,6 +163,45 @@ public abstract class WhatIfContract : ProviderTestBase
     }
 
     /// <summary>A lot of 12 demo units of the 455 kHz filter stored through the intake: 10 good, one high-loss, one low-rejection.</summary>
+    [StorageFact]
+    public async Task A_flipped_units_chart_has_its_stored_trace_and_the_limit_lines_of_both_revisions()
+    {
+        PreparedLot lot = await StoreLotAsync();
+        // Raising the relative rejection minimum by 10 dB moves that rule's limit line 10 dB deeper on the same unit:
+        // both lines sit at "least loss + minimum" (the template's relative reference), so they differ by exactly 10 dB.
+        LimitTemplate draft = AsDraft(lot.Template, lot.Template.Rules.Select(r => r is StopbandRejectionRule { Id: "reject-low" } s
+            ? new StopbandRejectionRule(s.Id, s.Title, s.Band, s.MinimumDb + 10, s.Reference, s.Uncertainty)
+            : r).ToArray());
+        long measurementId;
+        await using (FilterQaDbContext context = Store.NewContext())
+        {
+            measurementId = await context.Units.Where(u => u.LotId == lot.Lot.Id && u.Serial == UnitSynthesiser.Serial(3))
+                .Select(u => u.CountedMeasurementId!.Value).SingleAsync();
+        }
+        var reader = new WhatIfUnitReader(Store.Contexts, Store.Catalog);
+
+        WhatIfUnitView unit = await reader.ReadAsync(measurementId, draft);
+
+        Assert.Equal((lot.LotNumber, UnitSynthesiser.Serial(3), 1, 1), (unit.LotNumber, unit.Serial, unit.Attempt, unit.RecordedRevision));
+        Assert.Null(unit.Note);
+        MaskLine recorded = Assert.Single(unit.RecordedMaskLines, l => l.RuleId == "reject-low");
+        MaskLine tried = Assert.Single(unit.DraftMaskLines, l => l.RuleId == "reject-low");
+        Assert.Equal(recorded.FrequenciesHz.ToArray(), tried.FrequenciesHz.ToArray());
+        for (int i = 0; i < recorded.LossDb.Length; i++)
+        {
+            // 1e-9 dB: the same least loss plus two minimums; rounding only.
+            Assert.Equal(recorded.LossDb[i] + 10, tried.LossDb[i], 1e-9);
+        }
+        Assert.Equal(unit.RecordedMaskLines.Count, unit.DraftMaskLines.Count);
+        Assert.True(unit.Trace.Grid.Count > 100);
+
+        await Assert.ThrowsAsync<RecordNotFoundException>(() => reader.ReadAsync(long.MaxValue, draft));
+        var other = LimitTemplate.Create("TME-OTHER-1", 1, draft.Description, draft.Device, draft.NominalHz, TemplateStatus.Draft, null, null,
+            draft.Sweep, draft.DecisionRule, draft.Rules);
+        var e = await Assert.ThrowsAsync<ArgumentException>(() => reader.ReadAsync(measurementId, other));
+        Assert.Contains("of part " + lot.PartNumber, e.Message, StringComparison.Ordinal);
+    }
+
     private async Task<PreparedLot> StoreLotAsync(RetestPolicy? retests = null)
     {
         PreparedLot lot = await Store.PrepareLotAsync(PlanRequest.FullInspection(), quantity: Units, retests: retests);

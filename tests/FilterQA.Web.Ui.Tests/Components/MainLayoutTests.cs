@@ -38,19 +38,27 @@ public sealed class MainLayoutTests : BunitContext
     }
 
     [Fact]
-    public void A_quality_engineer_sees_lots_and_new_lot_but_not_the_bench_or_stations()
+    public void A_quality_engineer_sees_lots_new_lot_and_the_analysis_pages_but_not_the_bench_or_stations()
     {
         var cut = RenderAs("J. Lindqvist", RoleNames.QualityEngineer);
         string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
-        Assert.Equal(["Lots", "New lot", "Templates"], links);
+        Assert.Equal(["Lots", "New lot", "Templates", "What-if", "Trends", "Audit log"], links);
     }
 
     [Fact]
-    public void An_administrator_sees_lots_stations_and_accounts()
+    public void An_approver_sees_lots_new_lot_and_the_analysis_pages()
+    {
+        var cut = RenderAs("S. Petrova", RoleNames.Approver);
+        string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
+        Assert.Equal(["Lots", "New lot", "Templates", "What-if", "Trends", "Audit log"], links);
+    }
+
+    [Fact]
+    public void An_administrator_sees_lots_stations_trends_audit_and_accounts_but_not_the_what_if()
     {
         var cut = RenderAs("Administrator", RoleNames.Administrator);
         string[] links = cut.FindAll("nav a").Select(a => a.TextContent.Trim()).ToArray();
-        Assert.Equal(["Lots", "Templates", "Stations", "Accounts"], links);
-        Assert.Equal("admin/accounts", cut.FindAll("nav a")[3].GetAttribute("href"));
+        Assert.Equal(["Lots", "Templates", "Stations", "Trends", "Audit log", "Accounts"], links);
+        Assert.Equal("admin/accounts", cut.FindAll("nav a")[5].GetAttribute("href"));
     }
 }
