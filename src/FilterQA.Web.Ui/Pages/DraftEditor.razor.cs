@@ -98,11 +98,16 @@ public partial class DraftEditor : IDisposable
         }
     }
 
+    /// <summary>True once the circuit answers (after the first interactive render); the editor bar says so for browser tests.</summary>
+    private bool Live { get; set; }
+
     protected override void OnAfterRender(bool firstRender)
     {
         if (firstRender)
         {
             _leaving = Navigation.RegisterLocationChangingHandler(OnLeavingAsync);
+            Live = true;
+            StateHasChanged();
         }
     }
 

@@ -29,7 +29,7 @@ public sealed class TemplateEditorBrowserTests
         IPage page = await host.Browser.NewPageAsync();
         await BenchBrowserTests.SignInAsync(page, "1007", "638214");
         await page.GotoAsync($"/templates/{Bench.Part}/{draft}/edit");
-        await page.Locator("#template-text").WaitForAsync(new() { Timeout = WaitMs });
+        await page.Locator(".editor-bar[data-interactive=yes]").WaitForAsync(new() { Timeout = WaitMs });
         await page.Locator("#preview-stored").SelectOptionAsync(new SelectOptionValue { Index = 1 });
         await page.Locator("#preview-add").ClickAsync();
         ILocator lossRow = page.Locator(".preview-unit tr[data-rule='loss']");
