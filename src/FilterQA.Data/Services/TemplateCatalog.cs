@@ -110,6 +110,16 @@ public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext>
     /// <exception cref="RecordNotFoundException">The revision is not registered.</exception>
     /// <exception cref="StorageRuleException">The revision is not a draft.</exception>
     public async Task<TemplateRevisionInfo> ReleaseAsync(string partNumber, int revision, string reason, Actor actor, CancellationToken cancellationToken = default)
+        => await ReleaseAsync(partNumber, revision, reason, expectedContentHash: null, actor, cancellationToken).ConfigureAwait(false);
+
+    /// <summary>
+    /// Releases the draft only if its stored text still has <paramref name="expectedContentHash"/> (the hash of the
+    /// text the engineer saw checked): a draft saved by someone else in between is refused, not released unseen.
+    /// A null hash releases whatever the draft holds now.
+    /// </summary>
+    /// <exception cref="ReleaseRefusedException">No reason, the draft changed since it was shown, or the reference-unit check failed.</exception>
+    public async Task<TemplateRevisionInfo> ReleaseAsync(string partNumber, int revision, string reason, string? expectedContentHash, Actor actor,
+        CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(actor);
         if (string.IsNullOrWhiteSpace(reason))
@@ -123,6 +133,12 @@ public sealed partial class TemplateCatalog(IDbContextFactory<FilterQaDbContext>
         if (stored.Status != TemplateStatus.Draft)
         {
             throw new StorageRuleException($"{Key(partNumber, revision)} is {stored.Status}; only a draft can be released");
+        }
+        if (expectedContentHash is not null && !string.Equals(expectedContentHash, stored.ContentHash, StringComparison.Ordinal))
+        {
+            string by = stored.DraftSavedBy ?? stored.RegisteredBy;
+            throw new ReleaseRefusedException($"{Key(partNumber, revision)} is not released: the draft was changed by {by} after it was checked "
+                + $"(checked hash {expectedContentHash}, stored hash {stored.ContentHash}); check it again before releasing");
         }
         LimitTemplate draft = Parse(stored, partNumber);
         ReferenceCheck check = await ReferenceChecker.CheckAsync(context, stored.PartId, draft, cancellationToken).ConfigureAwait(false);

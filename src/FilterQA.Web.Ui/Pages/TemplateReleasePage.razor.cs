@@ -116,7 +116,8 @@ public partial class TemplateReleasePage
         try
         {
             Actor actor = ActorClaims.FromClaims((await AuthenticationState.ConfigureAwait(true)).User);
-            Released = await Catalog.ReleaseAsync(PartNumber, Revision, Reason ?? "", actor).ConfigureAwait(true);
+            // The hash of the text whose check is on screen: a draft saved by someone in between is refused, not released unseen.
+            Released = await Catalog.ReleaseAsync(PartNumber, Revision, Reason ?? "", Template.ContentHash, actor).ConfigureAwait(true);
             Template = await Catalog.LoadAsync(PartNumber, Revision).ConfigureAwait(true);
             Text = LimitTemplateWriter.Write(Template);
         }

@@ -88,6 +88,25 @@ public abstract class ReleaseContract : ProviderTestBase
     }
 
     [StorageFact]
+    public async Task A_release_of_a_draft_changed_after_its_check_is_refused_and_stores_nothing()
+    {
+        PreparedLot lot = await ReferenceLots.StoreAsync(Store);
+        await ReferenceLots.MarkAsync(Store, lot, "S0001");
+        LimitTemplate checkedDraft = Samples.Draft(lot.PartNumber, 2);
+        await Store.Catalog.RegisterAsync(checkedDraft, Samples.Engineer);
+        // Someone replaces the draft's text (a looser loss limit) after the engineer's check was shown.
+        await Store.Catalog.RegisterAsync(WithLossLimit(checkedDraft, 7.0), Samples.Engineer);
+        string before = await SnapshotAsync(lot.PartNumber);
+
+        var refused = await Assert.ThrowsAsync<ReleaseRefusedException>(
+            () => Store.Catalog.ReleaseAsync(lot.PartNumber, 2, Reason, checkedDraft.ContentHash, Samples.Engineer));
+
+        Assert.Contains("changed", refused.Message, StringComparison.Ordinal);
+        Assert.Contains(checkedDraft.ContentHash, refused.Message, StringComparison.Ordinal);
+        Assert.Equal(before, await SnapshotAsync(lot.PartNumber));
+    }
+
+    [StorageFact]
     public async Task A_draft_that_passes_every_reference_unit_is_released_with_its_reason_and_audited()
     {
         PreparedLot lot = await ReferenceLots.StoreAsync(Store);
