@@ -32,7 +32,7 @@ public static class HistogramChart
         }
         plot.Add.Bars(bars);
         double left = edges.Length > 0 ? unit.From(edges[0]) : 0, right = edges.Length > 0 ? unit.From(edges[^1]) : 1;
-        foreach ((double? limit, string name) in new[] { (parameter.Limits?.Lower, "lower limit"), (parameter.Limits?.Upper, "upper limit") })
+        foreach (double? limit in new[] { parameter.Limits?.Lower, parameter.Limits?.Upper })
         {
             if (limit is { } l && double.IsFinite(l))
             {
@@ -40,7 +40,6 @@ public static class HistogramChart
                 v.Color = MaskLineStyle.MaximumLoss;
                 v.LinePattern = LinePattern.Dashed;
                 v.LineWidth = 1.4f;
-                v.LegendText = name;
                 left = Math.Min(left, unit.From(l));
                 right = Math.Max(right, unit.From(l));
             }
@@ -53,6 +52,7 @@ public static class HistogramChart
         plot.Axes.SetLimitsX(left - pad, right + pad);
         plot.Axes.SetLimitsY(0, Math.Max(1, MaxOf(counts)) * 1.12);
         plot.Title(title);
+        plot.HideLegend();
         plot.XLabel(unit.Symbol.Length == 0 ? "value (ratio)" : "value (" + unit.Symbol + ")");
         plot.YLabel("units");
         ChartCanvas.Draw(plot, canvas, rect);

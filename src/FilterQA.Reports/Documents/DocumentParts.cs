@@ -92,7 +92,7 @@ internal static class DocumentParts
         columns.AddRange(
         [
             new TableColumn("Serial", 1.2f),
-            new TableColumn("Attempt", 0.8f, CellAlign.Right),
+            new TableColumn("Attempt", 1.15f, CellAlign.Right),
             new TableColumn("Verdict", 1.1f),
             new TableColumn("Failing rule", 2.6f),
             new TableColumn("Measured", 1.4f, CellAlign.Right),

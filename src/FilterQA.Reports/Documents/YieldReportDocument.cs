@@ -70,7 +70,7 @@ public sealed class YieldReportDocument(ReportFonts fonts)
 
         flow.Heading("Key parameters");
         flow.Table(CapabilityTable(content.Parameters));
-        flow.Text("Cp and Cpk here use the overall standard deviation of the values (strictly Pp and Ppk); the lower bound is Bissell's at the confidence shown.",
+        flow.Text("Histograms: units per bin of the counted values; dashed red lines are the limits. Cp and Cpk here use the overall standard deviation of the values (strictly Pp and Ppk); the lower bound is Bissell's at the confidence shown.",
             TextStyle.Small);
         float chartWidth = (flow.ContentWidthPt - 12) / 2;
         for (int i = 0; i < content.Parameters.Count; i += 2)

@@ -5,6 +5,8 @@ using FilterQA.Data.Services;
 using FilterQA.Web.Accounts;
 using FilterQA.Web.Api;
 using FilterQA.Web.Components;
+using FilterQA.Web.Documents;
+using FilterQA.Reports.Hosting;
 using FilterQA.Web.Setup;
 using FilterQA.Web.Watching;
 using Serilog;
@@ -25,6 +27,7 @@ public static class WebHostExtensions
         services.AddFilterQaStorage(configuration);
         services.AddScoped<StationApiKeys>();
         services.AddFilterQaUi();
+        services.AddFilterQaReports(configuration);
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(json => json.SerializerOptions.Converters.Add(new JsonStringEnumConverter()));
 
@@ -59,6 +62,7 @@ public static class WebHostExtensions
         app.MapGet("/health", () => TypedResults.Ok(new HealthAnswer("ok"))).AllowAnonymous().ExcludeFromDescription();
         app.MapAccountEndpoints();
         app.MapFilterQaApi();
+        app.MapDocumentEndpoints();
         app.MapRazorComponents<App>()
             .AddInteractiveServerRenderMode()
             .AddAdditionalAssemblies(PageAssemblies.Additional);
