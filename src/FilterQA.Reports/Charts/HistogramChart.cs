@@ -54,6 +54,7 @@ public static class HistogramChart
         plot.Title(title);
         plot.HideLegend();
         plot.XLabel(unit.Symbol.Length == 0 ? "value (ratio)" : "value (" + unit.Symbol + ")");
+        plot.Axes.Left.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { IntegerTicksOnly = true };
         plot.YLabel("units");
         ChartCanvas.Draw(plot, canvas, rect);
     }

@@ -42,7 +42,7 @@ public static class OverlayChart
         MaskLineStyle.Add(plot, mask, scale);
         (double low, double high) = SweepChart.LossRange(envelope.MinLossDb.Concat(envelope.MaxLossDb), mask);
         LossAxis.Apply(plot, low, high, scale, startHz, stopHz);
-        plot.ShowLegend(ScottPlot.Alignment.LowerRight);
+        plot.ShowLegend(ScottPlot.Alignment.UpperRight);
         ChartCanvas.Draw(plot, canvas, rect);
     }
 }

@@ -29,6 +29,7 @@ public static class ParetoBarChart
         plot.Axes.Left.TickGenerator = ticks;
         plot.Axes.SetLimitsY(0.4, Math.Max(1, shown.Length) + 0.6);
         plot.Axes.SetLimitsX(0, Math.Max(1, shown.Select(e => e.Count).DefaultIfEmpty(0).Max()) * 1.1);
+        plot.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { IntegerTicksOnly = true };
         plot.XLabel("failures (counted measurements)");
         ChartCanvas.Draw(plot, canvas, rect);
     }

@@ -24,7 +24,7 @@ public static class SweepChart
         MaskLineStyle.Add(plot, mask, scale);
         (double low, double high) = LossRange(loss, mask);
         LossAxis.Apply(plot, low, high, scale, trace.Grid.StartHz, trace.Grid.StopHz);
-        plot.ShowLegend(ScottPlot.Alignment.LowerRight);
+        plot.ShowLegend(ScottPlot.Alignment.UpperRight);
         ChartCanvas.Draw(plot, canvas, rect);
     }
 
