@@ -107,7 +107,7 @@ public sealed class PageFlow : IDisposable
         ArgumentNullException.ThrowIfNull(fields);
         ArgumentOutOfRangeException.ThrowIfLessThan(columns, 1);
         float columnWidth = ContentWidthPt / columns;
-        float labelWidth = Math.Min(columnWidth * 0.42f, ContentWidthPt / 2 * 0.42f);
+        float labelWidth = Math.Min(columnWidth * 0.5f, ContentWidthPt / 2 * 0.5f);
         TextStyle label = TextStyle.BodyBold with { SizePt = 8.5f };
         TextStyle value = TextStyle.Body with { SizePt = 8.5f };
         float lineHeight = LineHeight(value);

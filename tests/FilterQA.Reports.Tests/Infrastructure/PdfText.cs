@@ -13,6 +13,26 @@ public static class PdfText
         return document.GetPages().Select(p => string.Join(' ', p.GetWords().Select(w => w.Text))).ToArray();
     }
 
+    /// <summary>True when the words of <paramref name="expected"/> appear in <paramref name="text"/> in the same order (others may come between).</summary>
+    public static bool HasWordsInOrder(string text, string expected)
+    {
+        string[] words = text.Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        int at = 0;
+        foreach (string word in expected.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+        {
+            while (at < words.Length && words[at] != word)
+            {
+                at++;
+            }
+            if (at == words.Length)
+            {
+                return false;
+            }
+            at++;
+        }
+        return true;
+    }
+
     public static string All(byte[] pdf) => string.Join('\n', Pages(pdf));
 
     public static IReadOnlyList<IReadOnlyList<Word>> Words(byte[] pdf)
