@@ -62,6 +62,7 @@ public sealed class YieldReportDocument(ReportFonts fonts)
         }
         else
         {
+            flow.KeepTogether(260 + 3 * flow.LineHeight(TextStyle.Small)); // the chart with its caption
             flow.Block(260, (canvas, rect) => OverlayChart.Draw(fonts, canvas, rect, envelope, examples, content.Mask));
             flow.Text(string.Create(CultureInfo.InvariantCulture,
                 $"Shaded: the least and greatest loss of all {content.Sweeps.Count} counted sweeps in each of {envelope.CentresHz.Length} frequency bins; lines: {examples.Length} of the units. {content.MaskNote}"),

@@ -11,6 +11,20 @@ public static partial class Numbers
 
     public static IReadOnlyList<string> In(string text) => NumberPattern().Matches(text).Select(m => m.Value).ToArray();
 
+    /// <summary>The tokens of a printed line that are whole numbers (double.TryParse, invariant), with the token after each (its unit, when printed).</summary>
+    public static IReadOnlyList<(string Number, string? Unit)> Tokens(string[] line)
+    {
+        var found = new List<(string, string?)>();
+        for (int i = 0; i < line.Length; i++)
+        {
+            if (double.TryParse(line[i], NumberStyles.Float, CultureInfo.InvariantCulture, out _))
+            {
+                found.Add((line[i], i + 1 < line.Length ? line[i + 1] : null));
+            }
+        }
+        return found;
+    }
+
     public static double Parse(string text) => double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
 
     /// <summary>Half a unit of the last printed digit: the most a correctly rounded print can differ from the value.</summary>

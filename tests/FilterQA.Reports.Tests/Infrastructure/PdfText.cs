@@ -33,6 +33,31 @@ public static class PdfText
         return true;
     }
 
+    /// <summary>Printed lines, top to bottom on each page: words whose baselines lie within 2 pt, left to right.</summary>
+    public static IReadOnlyList<string[]> Lines(byte[] pdf)
+    {
+        using PdfDocument document = PdfDocument.Open(pdf);
+        var lines = new List<string[]>();
+        foreach (Page page in document.GetPages())
+        {
+            var groups = new List<List<Word>>();
+            foreach (Word word in page.GetWords().OrderByDescending(w => w.BoundingBox.Bottom))
+            {
+                List<Word>? line = groups.LastOrDefault();
+                if (line is null || Math.Abs(line[0].BoundingBox.Bottom - word.BoundingBox.Bottom) > 2)
+                {
+                    groups.Add([word]);
+                }
+                else
+                {
+                    line.Add(word);
+                }
+            }
+            lines.AddRange(groups.Select(g => g.OrderBy(w => w.BoundingBox.Left).Select(w => w.Text).ToArray()));
+        }
+        return lines;
+    }
+
     public static string All(byte[] pdf) => string.Join('\n', Pages(pdf));
 
     public static IReadOnlyList<IReadOnlyList<Word>> Words(byte[] pdf)
