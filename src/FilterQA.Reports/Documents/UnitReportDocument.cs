@@ -25,10 +25,9 @@ public sealed class UnitReportDocument(ReportFonts fonts)
             DocumentParts.Field("Operator", content.Operator),
             DocumentParts.Field("Measured at (UTC)", Say.Time(content.MeasuredAt)),
             DocumentParts.Field("Thru", content.Thru),
-            DocumentParts.Field("Sweep file", content.SweepFile),
             DocumentParts.Field("Measurement", content.MeasurementId.ToString(System.Globalization.CultureInfo.InvariantCulture)),
         ]);
-        flow.Fields([DocumentParts.Field("Sweep SHA-256", content.SweepSha256)], 1);
+        flow.Fields([DocumentParts.Field("Sweep file", content.SweepFile), DocumentParts.Field("Sweep SHA-256", content.SweepSha256)], 1);
         flow.Space(4);
         float chartHeight = Math.Min(250, flow.PageHeightPt * 0.3f);
         flow.Block(chartHeight, (canvas, rect) => SweepChart.Draw(fonts, canvas, rect, content.Sweep, content.Mask, content.Serial));
