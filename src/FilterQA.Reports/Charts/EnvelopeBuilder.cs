@@ -29,44 +29,11 @@ public static class EnvelopeBuilder
             startHz = Math.Min(startHz, trace.Grid.StartHz);
             stopHz = Math.Max(stopHz, trace.Grid.StopHz);
         }
-        double spanHz = stopHz - startHz;
-        int bins = spanHz > 0 ? binCount : 1;
-        double binsPerHz = spanHz > 0 ? bins / spanHz : 0;
-        var min = new double[bins];
-        var max = new double[bins];
-        Array.Fill(min, double.PositiveInfinity);
-        Array.Fill(max, double.NegativeInfinity);
+        var accumulator = new EnvelopeAccumulator(startHz, stopHz, binCount);
         foreach (ResponseTrace trace in traces)
         {
-            ReadOnlySpan<double> hz = trace.Grid.Hz;
-            ReadOnlySpan<double> loss = trace.LossDb;
-            for (int i = 0; i < hz.Length; i++)
-            {
-                int b = Math.Min((int)((hz[i] - startHz) * binsPerHz), bins - 1); // the stop frequency belongs to the last bin
-                double value = loss[i];
-                if (value < min[b])
-                {
-                    min[b] = value;
-                }
-                if (value > max[b])
-                {
-                    max[b] = value;
-                }
-            }
+            accumulator.Add(trace);
         }
-        double widthHz = spanHz / bins;
-        var centres = new List<double>(bins);
-        var lows = new List<double>(bins);
-        var highs = new List<double>(bins);
-        for (int b = 0; b < bins; b++)
-        {
-            if (min[b] <= max[b])
-            {
-                centres.Add(startHz + (b + 0.5) * widthHz);
-                lows.Add(min[b]);
-                highs.Add(max[b]);
-            }
-        }
-        return new LossEnvelope([.. centres], [.. lows], [.. highs], traces.Count);
+        return accumulator.ToEnvelope();
     }
 }

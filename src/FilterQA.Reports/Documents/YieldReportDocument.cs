@@ -13,9 +13,6 @@ namespace FilterQA.Reports.Documents;
 /// </summary>
 public sealed class YieldReportDocument(ReportFonts fonts)
 {
-    /// <summary>Units drawn as single lines on the overlay besides the envelope of all of them.</summary>
-    public const int ExampleSweeps = 3;
-
     public void Render(YieldReportContent content, PaperSize paper, Stream output)
     {
         ArgumentNullException.ThrowIfNull(content);
@@ -54,9 +51,9 @@ public sealed class YieldReportDocument(ReportFonts fonts)
         DocumentParts.Pareto(flow, fonts, content.Pareto);
 
         flow.Heading("Every unit against the mask");
-        LossEnvelope envelope = EnvelopeBuilder.Build(content.Sweeps);
-        ResponseTrace[] examples = Examples(content.Sweeps);
-        if (content.Sweeps.Count == 0)
+        LossEnvelope envelope = content.Envelope;
+        IReadOnlyList<ResponseTrace> examples = content.ExampleSweeps;
+        if (envelope.TraceCount == 0)
         {
             flow.Text("No unit has a counted sweep.", TextStyle.Body);
         }
@@ -65,7 +62,7 @@ public sealed class YieldReportDocument(ReportFonts fonts)
             flow.KeepTogether(260 + 3 * flow.LineHeight(TextStyle.Small)); // the chart with its caption
             flow.Block(260, (canvas, rect) => OverlayChart.Draw(fonts, canvas, rect, envelope, examples, content.Mask));
             flow.Text(string.Create(CultureInfo.InvariantCulture,
-                $"Shaded: the least and greatest loss of all {content.Sweeps.Count} counted sweeps in each of {envelope.CentresHz.Length} frequency bins; lines: {examples.Length} of the units. {content.MaskNote}"),
+                $"Shaded: the least and greatest loss of all {envelope.TraceCount} counted sweeps in each of {envelope.CentresHz.Length} frequency bins; lines: {examples.Count} of the units. {content.MaskNote}"),
                 TextStyle.Small);
         }
 
@@ -142,16 +139,4 @@ public sealed class YieldReportDocument(ReportFonts fonts)
     }
 
     private static double? Fraction(int part, int whole) => whole == 0 ? null : (double)part / whole;
-
-    // Evenly spread units, so the lines show the start, middle and end of the sample rather than three neighbours.
-    private static ResponseTrace[] Examples(IReadOnlyList<ResponseTrace> sweeps)
-    {
-        int n = Math.Min(ExampleSweeps, sweeps.Count);
-        var picked = new ResponseTrace[n];
-        for (int i = 0; i < n; i++)
-        {
-            picked[i] = sweeps[n == 1 ? 0 : (int)((long)i * (sweeps.Count - 1) / (n - 1))];
-        }
-        return picked;
-    }
 }

@@ -8,6 +8,7 @@ using FilterQA.Data.Codecs;
 using FilterQA.Data.Entities;
 using FilterQA.Data.Services;
 using FilterQA.Data.Services.Certificates;
+using FilterQA.Reports.Charts;
 using FilterQA.Reports.Documents;
 using FilterQA.Reports.Text;
 using Microsoft.EntityFrameworkCore;
@@ -38,7 +39,7 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
         await using FilterQaDbContext context = await contexts.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
         LotHeader header = await HeaderAsync(context, lot, cancellationToken).ConfigureAwait(false);
         IReadOnlyList<NonConformingUnit> failing = await NonConformingAsync(context, [lot.Id], cancellationToken).ConfigureAwait(false);
-        return new RejectionReportContent(header, lot.UnitsTested, lot.Defectives, (lot.SampleDecision ?? lot.Decision).ToString(), lot.DispositionBy,
+        return new RejectionReportContent(header, lot.UnitsTested, lot.Defectives, Say.Decision(lot.SampleDecision ?? lot.Decision), lot.DispositionBy,
             lot.DispositionAt, lot.DispositionReason, lot.DispositionIsOverride, failing, statistics.FailingRules.Entries, Stamp(requestedBy));
     }
 
@@ -127,38 +128,69 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
         IReadOnlyList<(LotSummary Lot, LotStatistics Statistics)> perLot, IReadOnlyList<ParameterSummary> parameters, string requestedBy,
         CancellationToken cancellationToken)
     {
-        LotYieldRow[] rows = perLot.Select(l => new LotYieldRow(l.Lot.LotNumber, l.Lot.Supplier, l.Lot.CreatedAt, l.Lot.Status.ToString(),
+        LotYieldRow[] rows = perLot.Select(l => new LotYieldRow(l.Lot.LotNumber, l.Lot.Supplier, l.Lot.CreatedAt, Say.Status(l.Lot.Status),
             l.Statistics.Yield.UnitsTested, l.Statistics.Yield.FirstPassGo, l.Statistics.Yield.FinalGo)).ToArray();
         ParetoChart pareto = ParetoChart.FromCounts(perLot.SelectMany(l => l.Statistics.FailingRules.Entries)
             .GroupBy(e => e.Rule, StringComparer.Ordinal).Select(g => new KeyValuePair<string, int>(g.Key, g.Sum(e => e.Count))));
         long[] lotIds = perLot.Select(l => l.Lot.Id).ToArray();
-        List<ResponseTrace> traces = await CountedTracesAsync(context, lotIds, cancellationToken).ConfigureAwait(false);
+        (LossEnvelope envelope, List<ResponseTrace> examples, ResponseTrace? transmission) =
+            await CountedSweepsAsync(context, lotIds, cancellationToken).ConfigureAwait(false);
         IReadOnlyList<NonConformingUnit> failing = await NonConformingAsync(context, lotIds, cancellationToken).ConfigureAwait(false);
         LotSummary first = perLot[0].Lot;
         LimitTemplate template = await templates.LoadAsync(first.PartNumber, first.TemplateRevision, cancellationToken).ConfigureAwait(false);
-        ResponseTrace? transmission = traces.FirstOrDefault(t => t.Path == ResponsePath.Transmission);
         (IReadOnlyList<MaskLine> mask, string note) = transmission is null
-            ? ([], traces.Count == 0 ? "No unit measured yet." : "These sweeps are reflections; the limit lines apply to transmission.")
+            ? ([], envelope.TraceCount == 0 ? "No unit measured yet." : "These sweeps are reflections; the limit lines apply to transmission.")
             : PlaceMask(template, transmission, "the first unit");
         if (perLot.Select(l => l.Lot.TemplateRevision).Distinct().Count() > 1)
         {
             note += FormattableString.Invariant($" The lots were tested against different template revisions; the lines are those of revision {first.TemplateRevision}.");
         }
-        return new YieldReportContent(scope, partNumber, description, rows, pareto.Entries, parameters, traces, mask, note, failing, Stamp(requestedBy));
+        return new YieldReportContent(scope, partNumber, description, rows, pareto.Entries, parameters, envelope, examples, mask, note, failing,
+            Stamp(requestedBy));
     }
 
-    private static async Task<List<ResponseTrace>> CountedTracesAsync(FilterQaDbContext context, long[] lotIds, CancellationToken cancellationToken)
+    /// <summary>Units of a yield report drawn as single lines beside the envelope of all of them.</summary>
+    public const int ExampleSweeps = 3;
+
+    // Every counted sweep is folded into the envelope as it is read and then dropped, so a period of many lots needs
+    // memory for the bins and three example sweeps only. The span comes first from the stored sweep columns.
+    private static async Task<(LossEnvelope Envelope, List<ResponseTrace> Examples, ResponseTrace? FirstTransmission)> CountedSweepsAsync(
+        FilterQaDbContext context, long[] lotIds, CancellationToken cancellationToken)
     {
-        var traces = new List<ResponseTrace>();
+        IQueryable<MeasurementRecord> counted = context.Units.AsNoTracking().Where(u => lotIds.Contains(u.LotId) && u.CountedMeasurementId != null)
+            .Join(context.Measurements.AsNoTracking(), u => u.CountedMeasurementId, m => (long?)m.Id, (u, m) => m);
+        var span = await counted.GroupBy(m => 1)
+            .Select(g => new { Count = g.Count(), StartHz = g.Min(m => m.Sweep.StartHz), StopHz = g.Max(m => m.Sweep.StopHz) })
+            .SingleOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+        if (span is null || span.Count == 0)
+        {
+            return (LossEnvelope.Empty, [], null);
+        }
+        var accumulator = new EnvelopeAccumulator(span.StartHz, span.StopHz, EnvelopeBuilder.DefaultBinCount);
+        var picks = new HashSet<int>(Enumerable.Range(0, Math.Min(ExampleSweeps, span.Count))
+            .Select(i => ExampleSweeps == 1 || span.Count == 1 ? 0 : (int)((long)i * (span.Count - 1) / (Math.Min(ExampleSweeps, span.Count) - 1))));
+        var examples = new List<ResponseTrace>(ExampleSweeps);
+        ResponseTrace? transmission = null;
+        int index = 0;
         IAsyncEnumerable<byte[]> blobs = context.Units.AsNoTracking().Where(u => lotIds.Contains(u.LotId) && u.CountedMeasurementId != null)
             .OrderBy(u => u.LotId).ThenBy(u => u.SamplePosition)
             .Join(context.Measurements.AsNoTracking(), u => u.CountedMeasurementId, m => (long?)m.Id, (u, m) => m.Sweep.Trace)
             .AsAsyncEnumerable();
         await foreach (byte[] blob in blobs.WithCancellation(cancellationToken).ConfigureAwait(false))
         {
-            traces.Add(ResponseTraceCodec.Decode(blob));
+            ResponseTrace trace = ResponseTraceCodec.Decode(blob);
+            accumulator.Add(trace);
+            if (picks.Contains(index))
+            {
+                examples.Add(trace);
+            }
+            if (transmission is null && trace.Path == ResponsePath.Transmission)
+            {
+                transmission = trace;
+            }
+            index++;
         }
-        return traces;
+        return (accumulator.ToEnvelope(), examples, transmission);
     }
 
     private static async Task<IReadOnlyList<NonConformingUnit>> NonConformingAsync(FilterQaDbContext context, long[] lotIds, CancellationToken cancellationToken)
@@ -220,7 +252,7 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
         string description = await DescriptionAsync(context, lot.PartNumber, cancellationToken).ConfigureAwait(false);
         SamplingPlan plan = lot.Plan;
         return new LotHeader(lot.LotNumber, lot.PartNumber, description, lot.TemplateRevision, lot.TemplateHash, lot.Supplier, lot.SupplierLot, lot.DateCode,
-            lot.PurchaseOrder, lot.Customer, lot.QuantityReceived, lot.Status.ToString(), lot.CreatedAt,
+            lot.PurchaseOrder, lot.Customer, lot.QuantityReceived, Say.Status(lot.Status), lot.CreatedAt,
             new CertificatePlan(plan.StandardName, plan.Level?.ToString(), plan.Severity?.ToString(), plan.AqlPercent, plan.LetterUsed?.ToString(),
                 plan.SampleSize, plan.AcceptanceNumber, plan.RejectionNumber, plan.IsFullInspection));
     }

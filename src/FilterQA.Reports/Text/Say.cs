@@ -1,5 +1,7 @@
 using System.Globalization;
 using FilterQA.Core.Decisions;
+using FilterQA.Core.Sampling;
+using FilterQA.Data.Entities;
 
 namespace FilterQA.Reports.Text;
 
@@ -50,6 +52,25 @@ public static class Say
         }
         return string.Join(' ', parts);
     }
+
+    /// <summary>What a sampling plan decided, in words.</summary>
+    public static string Decision(LotDecision decision) => decision switch
+    {
+        LotDecision.Accept => "accept",
+        LotDecision.AcceptReturnToNormal => "accept, and return to normal inspection",
+        LotDecision.Reject => "reject",
+        LotDecision.RejectDecided => "reject (the rejection number was reached before the sample was complete)",
+        _ => "pending",
+    };
+
+    public static string Status(LotStatus status) => status switch
+    {
+        LotStatus.Open => "open",
+        LotStatus.InTest => "in test",
+        LotStatus.Held => "held",
+        LotStatus.Accepted => "accepted",
+        _ => "rejected",
+    };
 
     public static string OrDash(string? text) => string.IsNullOrWhiteSpace(text) ? "–" : text;
 }

@@ -51,7 +51,7 @@ public sealed class ReportDocumentTests
             }
         }
         string text = PdfText.All(pdf);
-        Assert.Contains(FormattableString.Invariant($"range of all {content.Sweeps.Count} units"), text, StringComparison.Ordinal);
+        Assert.Contains(FormattableString.Invariant($"range of all {content.Envelope.TraceCount} units"), text, StringComparison.Ordinal);
         foreach (NonConformingUnit unit in content.NonConforming)
         {
             Assert.Contains(lines, l => l.Length > 2 && l[0] == unit.LotNumber && l[1] == unit.Serial);
@@ -103,24 +103,24 @@ public sealed class ReportDocumentTests
     [Fact]
     public void The_envelope_holds_the_least_and_greatest_loss_of_every_point_in_each_bin()
     {
-        YieldReportContent content = SyntheticContent.Yield(40);
+        var sweeps = SyntheticContent.Sweeps(40);
         const int bins = 50;
-        LossEnvelope envelope = EnvelopeBuilder.Build(content.Sweeps, bins);
-        double start = content.Sweeps.Min(t => t.Grid.StartHz), stop = content.Sweeps.Max(t => t.Grid.StopHz);
+        LossEnvelope envelope = EnvelopeBuilder.Build(sweeps, bins);
+        double start = sweeps.Min(t => t.Grid.StartHz), stop = sweeps.Max(t => t.Grid.StopHz);
         double width = (stop - start) / bins;
         // Brute force: for each bin centre, scan every point of every sweep that falls in [centre − w/2, centre + w/2).
         for (int b = 0; b < envelope.CentresHz.Length; b++)
         {
             double lo = envelope.CentresHz[b] - width / 2, hi = envelope.CentresHz[b] + width / 2;
             bool last = Math.Abs(hi - stop) < width * 1e-9;
-            var values = content.Sweeps.SelectMany(t => t.Grid.Hz.ToArray().Select((hz, i) => (hz, loss: t.LossDb[i])))
+            var values = sweeps.SelectMany(t => t.Grid.Hz.ToArray().Select((hz, i) => (hz, loss: t.LossDb[i])))
                 .Where(p => p.hz >= lo - 1e-6 && (p.hz < hi - 1e-6 || last)).Select(p => p.loss).ToArray();
             Assert.NotEmpty(values);
             // Exact: the envelope copies measured values, it computes none.
             Assert.Equal(values.Min(), envelope.MinLossDb[b]);
             Assert.Equal(values.Max(), envelope.MaxLossDb[b]);
         }
-        Assert.Equal(content.Sweeps.Count, envelope.TraceCount);
+        Assert.Equal(sweeps.Length, envelope.TraceCount);
     }
 
     private static void AssertAfter(IReadOnlyList<string[]> lines, string[] label, double expected)

@@ -5,6 +5,7 @@ using FilterQA.Core.Statistics;
 using FilterQA.Core.Sweeps;
 using FilterQA.Core.Synthesis;
 using FilterQA.Data.Services.Certificates;
+using FilterQA.Reports.Charts;
 using FilterQA.Reports.Documents;
 
 namespace FilterQA.Reports.Tests.Infrastructure;
@@ -77,9 +78,7 @@ public static class SyntheticContent
     /// <summary>A yield report of <paramref name="units"/> synthesised units of the 455 kHz demo filter, defects at <paramref name="defectShare"/>.</summary>
     public static YieldReportContent Yield(int units, double defectShare = 0.05, int lots = 2)
     {
-        DemoPart part = DemoParts.Get("TME-CF455-15");
-        var synthesiser = new UnitSynthesiser(20261103);
-        ResponseTrace[] sweeps = synthesiser.Lot(part, units, defectShare).Select(u => ResponseTrace.Primary(u.Sweep)).ToArray();
+        ResponseTrace[] sweeps = Sweeps(units, defectShare);
         var rows = new List<LotYieldRow>();
         int perLot = units / lots;
         for (int l = 0; l < lots; l++)
@@ -109,8 +108,12 @@ public static class SyntheticContent
             new("stopband-high", LimitBoundary.Lower, ImmutableArray.Create(555000.0, 655000.0), ImmutableArray.Create(40.0, 40.0)),
         ];
         return new YieldReportContent(lots == 1 ? "lot VP-2611-0042" : "2026-11-01 to 2026-11-30", "TME-CF455-15", "455 kHz ceramic IF filter", rows, pareto.Entries,
-            parameters, sweeps, mask, "Limit lines as for unit S0001.", failing, new ReportStamp("J. Lindqvist", Signed));
+            parameters, EnvelopeBuilder.Build(sweeps), [sweeps[0], sweeps[^1]], mask, "Limit lines as for unit S0001.", failing, new ReportStamp("J. Lindqvist", Signed));
     }
+
+    /// <summary>Counted sweeps of <paramref name="units"/> synthesised units of the 455 kHz demo filter (seeded, repeatable).</summary>
+    public static ResponseTrace[] Sweeps(int units, double defectShare = 0.05) =>
+        new UnitSynthesiser(20261103).Lot(DemoParts.Get("TME-CF455-15"), units, defectShare).Select(u => ResponseTrace.Primary(u.Sweep)).ToArray();
 
     public static UnitReportContent Unit()
     {

@@ -117,7 +117,8 @@ public sealed class StoredReportsTests(StoredLotsFixture fixture) : IClassFixtur
         {
             Assert.Contains(lines, l => l.Length > 1 && l[0] == RejectedLot && l[1] == unit.Serial);
         }
-        Assert.Equal(units.Count, content.Sweeps.Count);
+        Assert.Equal(units.Count, content.Envelope.TraceCount);
+        Assert.Equal(3, content.ExampleSweeps.Count);
     }
 
     [Fact]
