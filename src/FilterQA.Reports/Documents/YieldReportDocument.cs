@@ -13,6 +13,8 @@ namespace FilterQA.Reports.Documents;
 /// </summary>
 public sealed class YieldReportDocument(ReportFonts fonts)
 {
+    private const float OverlayHeightPt = 260;
+
     public void Render(YieldReportContent content, PaperSize paper, Stream output)
     {
         ArgumentNullException.ThrowIfNull(content);
@@ -50,6 +52,8 @@ public sealed class YieldReportDocument(ReportFonts fonts)
         flow.Heading("Pareto of failing rules");
         DocumentParts.Pareto(flow, fonts, content.Pareto);
 
+        // The heading, the chart and its caption stay on one page.
+        flow.KeepTogether(30 + OverlayHeightPt + 3 * flow.LineHeight(TextStyle.Small));
         flow.Heading("Every unit against the mask");
         LossEnvelope envelope = content.Envelope;
         IReadOnlyList<ResponseTrace> examples = content.ExampleSweeps;
@@ -59,8 +63,7 @@ public sealed class YieldReportDocument(ReportFonts fonts)
         }
         else
         {
-            flow.KeepTogether(260 + 3 * flow.LineHeight(TextStyle.Small)); // the chart with its caption
-            flow.Block(260, (canvas, rect) => OverlayChart.Draw(fonts, canvas, rect, envelope, examples, content.Mask));
+            flow.Block(OverlayHeightPt, (canvas, rect) => OverlayChart.Draw(fonts, canvas, rect, envelope, examples, content.Mask));
             flow.Text(string.Create(CultureInfo.InvariantCulture,
                 $"Shaded: the least and greatest loss of all {envelope.TraceCount} counted sweeps in each of {envelope.CentresHz.Length} frequency bins; lines: {examples.Count} of the units. {content.MaskNote}"),
                 TextStyle.Small);
