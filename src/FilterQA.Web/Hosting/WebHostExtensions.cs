@@ -2,10 +2,12 @@ using FilterQA.Web.Ui;
 using System.Text.Json.Serialization;
 using FilterQA.Data.Hosting;
 using FilterQA.Data.Services;
+using FilterQA.Reports.Hosting;
 using FilterQA.Web.Accounts;
 using FilterQA.Web.Api;
 using FilterQA.Web.Components;
 using FilterQA.Web.Files;
+using FilterQA.Web.Documents;
 using FilterQA.Web.Setup;
 using FilterQA.Web.Templates;
 using FilterQA.Web.Watching;
@@ -27,6 +29,7 @@ public static class WebHostExtensions
         services.AddFilterQaStorage(configuration);
         services.AddScoped<StationApiKeys>();
         services.AddFilterQaUi();
+        services.AddFilterQaReports(configuration);
         services.AddProblemDetails();
         services.ConfigureHttpJsonOptions(json => json.SerializerOptions.Converters.Add(new JsonStringEnumConverter()));
 
@@ -65,6 +68,7 @@ public static class WebHostExtensions
         app.MapFilterQaApi();
         app.MapLotExportEndpoints();
         app.MapTemplateFileEndpoints();
+        app.MapDocumentEndpoints();
         app.MapRazorComponents<App>()
             .AddInteractiveServerRenderMode()
             .AddAdditionalAssemblies(PageAssemblies.Additional);
