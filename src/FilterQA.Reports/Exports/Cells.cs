@@ -22,7 +22,7 @@ internal static class Cells
 
     internal static Cell Text(string? value) => value is null
         ? new Cell()
-        : new Cell { DataType = CellValues.InlineString, InlineString = new InlineString(new Text(XmlSafe(value)) { Space = DocumentFormat.OpenXml.SpaceProcessingModeValues.Preserve }) };
+        : new Cell { DataType = CellValues.InlineString, InlineString = new InlineString(new DocumentFormat.OpenXml.Spreadsheet.Text(XmlSafe(value)) { Space = DocumentFormat.OpenXml.SpaceProcessingModeValues.Preserve }) };
 
     // XML 1.0 cannot carry most control characters; they are dropped rather than failing the whole export.
     private static string XmlSafe(string value)

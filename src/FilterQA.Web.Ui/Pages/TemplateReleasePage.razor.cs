@@ -10,7 +10,7 @@ namespace FilterQA.Web.Ui.Pages;
 
 /// <summary>
 /// Releases a draft: shows its text, judges it against the part's reference units (serial, lot, outcome, failing
-/// rules), asks for the reason and releases through <see cref="TemplateCatalog.ReleaseAsync"/>, which makes the same
+/// rules), asks for the reason and releases through <see cref="TemplateCatalog.ReleaseAsync(string, int, string, string?, Actor, CancellationToken)"/>, which makes the same
 /// check again in the release's transaction. Quality engineers only.
 /// </summary>
 public partial class TemplateReleasePage
