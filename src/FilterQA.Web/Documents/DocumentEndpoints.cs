@@ -1,6 +1,7 @@
 using System.Globalization;
 using FilterQA.Data;
 using FilterQA.Data.Accounts;
+using FilterQA.Data.Services.Certificates;
 using FilterQA.Reports.Documents;
 using FilterQA.Reports.Pdf;
 using FilterQA.Reports.Sources;
@@ -10,20 +11,39 @@ using FilterQA.Web.Api;
 namespace FilterQA.Web.Documents;
 
 /// <summary>
-/// The PDF reports for signed-in people: a lot's rejection and yield reports, a part's yield report over a period,
-/// a measurement's unit report. Each takes ?paper=a4|letter (default a4); bad input answers ProblemDetails saying why.
+/// The PDF documents for signed-in people: a lot's certificate of conformance (as signed), its rejection and yield
+/// reports, a part's yield report over a period, a measurement's unit report. Each takes ?paper=a4|letter (default a4); bad input answers ProblemDetails saying why.
 /// </summary>
 public static class DocumentEndpoints
 {
     public static IEndpointRouteBuilder MapDocumentEndpoints(this IEndpointRouteBuilder endpoints)
     {
         ArgumentNullException.ThrowIfNull(endpoints);
+        endpoints.MapGet("/lots/{lotNumber}/certificate.pdf", CertificateAsync).RequireAuthorization(Policies.Person).ExcludeFromDescription();
         endpoints.MapGet("/lots/{lotNumber}/rejection-report.pdf", RejectionAsync).RequireAuthorization(Policies.Person).ExcludeFromDescription();
         endpoints.MapGet("/lots/{lotNumber}/yield-report.pdf", LotYieldAsync).RequireAuthorization(Policies.Person).ExcludeFromDescription();
         endpoints.MapGet("/parts/{partNumber}/yield-report.pdf", PartYieldAsync).RequireAuthorization(Policies.Person).ExcludeFromDescription();
         endpoints.MapGet("/measurements/{id:long}/report.pdf", UnitAsync).RequireAuthorization(Policies.Person).ExcludeFromDescription();
         return endpoints;
     }
+
+    // The certificate is drawn from the snapshot frozen at signing, never from today's rows; it is handed out only while
+    // the lot's stored data still has the digest it carries, so a printed certificate always verifies.
+    private static Task<IResult> CertificateAsync(string lotNumber, string? paper, CertificateService certificates, CertificateDocument document,
+        CancellationToken cancellationToken) =>
+        AnswerAsync(paper, $"certificate-{lotNumber}.pdf", async (size, stream) =>
+        {
+            IssuedCertificate issued = await certificates.GetAsync(lotNumber, cancellationToken).ConfigureAwait(false)
+                ?? throw new RecordNotFoundException($"lot {lotNumber} has no certificate of conformance: an approver signs one on the lot page once "
+                    + "the lot is accepted (a rejected lot gets a rejection report instead)");
+            string now = await certificates.ComputeDigestAsync(lotNumber, cancellationToken).ConfigureAwait(false);
+            if (!string.Equals(now, issued.DataDigestSha256, StringComparison.Ordinal))
+            {
+                throw new ReportRefusedException($"certificate {issued.CertificateNumber} of lot {lotNumber} is not handed out: the lot's stored data "
+                    + $"no longer has the digest it was signed with ({issued.DataDigestSha256}; now {now})");
+            }
+            document.Render(issued.Snapshot, size, stream);
+        });
 
     private static Task<IResult> RejectionAsync(string lotNumber, string? paper, HttpContext http, ReportContentSource source, RejectionReportDocument document,
         CancellationToken cancellationToken) =>

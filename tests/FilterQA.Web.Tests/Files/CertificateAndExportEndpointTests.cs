@@ -97,6 +97,33 @@ public sealed class CertificateAndExportEndpointTests : IDisposable
         Assert.Contains("format 'pdf' is not known", Detail(await badFormat.Content.ReadAsStringAsync()), StringComparison.Ordinal);
     }
 
+    [Fact]
+    public async Task The_certificate_pdf_is_the_signed_certificate_and_a_lot_without_one_is_answered_with_the_reason()
+    {
+        await Bench.CreatePersonAsync(_factory, "mokafor", RoleNames.Operator);
+        HttpClient client = await Bench.SignedInAsync(_factory, "mokafor");
+        string unsigned = await Bench.PrepareLotAsync(_factory);
+        HttpResponseMessage none = await client.GetAsync($"/lots/{unsigned}/certificate.pdf");
+        Assert.Equal(HttpStatusCode.NotFound, none.StatusCode);
+        Assert.Contains($"lot {unsigned} has no certificate of conformance", Detail(await none.Content.ReadAsStringAsync()), StringComparison.Ordinal);
+
+        (string lot, IssuedCertificate certificate) = await AcceptedLotWithCertificateAsync();
+        foreach (string paper in new[] { "a4", "letter" })
+        {
+            HttpResponseMessage pdf = await client.GetAsync($"/lots/{lot}/certificate.pdf?paper={paper}");
+            Assert.Equal(HttpStatusCode.OK, pdf.StatusCode);
+            Assert.Equal("application/pdf", pdf.Content.Headers.ContentType?.MediaType);
+            byte[] body = await pdf.Content.ReadAsByteArrayAsync();
+            // ISO 32000-1 section 7.5.2: a PDF file begins with "%PDF-"; the number is printed as text, so it is in the file's words.
+            Assert.Equal("%PDF-"u8.ToArray(), body[..5]);
+            Assert.Contains(certificate.CertificateNumber, PdfReading.Words(body), StringComparison.Ordinal);
+        }
+        HttpResponseMessage badPaper = await client.GetAsync($"/lots/{lot}/certificate.pdf?paper=a5");
+        Assert.Equal(HttpStatusCode.BadRequest, badPaper.StatusCode);
+        HttpResponseMessage anonymous = await Bench.Client(_factory).GetAsync($"/lots/{lot}/certificate.pdf");
+        Assert.NotEqual(HttpStatusCode.OK, anonymous.StatusCode);
+    }
+
     private static string Detail(string problem) => JsonDocument.Parse(problem).RootElement.GetProperty("detail").GetString()!;
 
     // A lot accepted by override (no unit needed for the pages under test) and its certificate.
