@@ -28,12 +28,12 @@ public static class LotResultsCsv
         await foreach (ExportMeasurement m in reader.MeasurementsAsync(lotNumber, cancellationToken).ConfigureAwait(false))
         {
             fields.Clear();
-            fields.Add(m.Serial);
+            fields.Add(SpreadsheetSafe(m.Serial));
             fields.Add(m.Attempt.ToString(CultureInfo.InvariantCulture));
             fields.Add(ResultColumns.Counted(m.CountsForLot));
             fields.Add(m.Verdict.ToString());
             fields.Add(ResultColumns.Time(m.MeasuredAt));
-            fields.Add(m.Station);
+            fields.Add(SpreadsheetSafe(m.Station));
             foreach (ExportRuleColumn rule in rules)
             {
                 if (m.Rules.TryGetValue(rule.RuleId, out ExportRuleValue? r))
@@ -51,6 +51,17 @@ public static class LotResultsCsv
             await writer.WriteAsync(Line(fields)).ConfigureAwait(false);
         }
         await writer.FlushAsync(cancellationToken).ConfigureAwait(false);
+    }
+
+    /// <summary>
+    /// A text field as a spreadsheet may open it safely: text typed by people (serials, station names) that begins
+    /// with =, +, -, @, a tab or a carriage return would be taken for a formula, so it gets a leading apostrophe
+    /// (the OWASP "CSV Injection" advice). Numbers are written by the exporter itself and never pass through here.
+    /// </summary>
+    public static string SpreadsheetSafe(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return text.Length > 0 && text[0] is '=' or '+' or '-' or '@' or '\t' or '\r' ? "'" + text : text;
     }
 
     /// <summary>One CSV record with its CRLF, each field quoted only when it must be (RFC 4180 section 2, rules 5 to 7).</summary>
