@@ -15,9 +15,13 @@ public sealed class BrowserHost : IAsyncDisposable
 {
     public const string ChromiumPath = "/usr/bin/chromium";
 
+    private static readonly string[] LaunchArgs =
+        ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"];
+
     private readonly TempFolder _data;
     private readonly TempFolder _profile;
     private IPlaywright? _playwright;
+    private IBrowser? _separate;
 
     private BrowserHost(TempFolder data, TempFolder profile, WebFactory factory, string baseUrl, IPlaywright playwright, IBrowserContext browser)
     {
@@ -62,11 +66,15 @@ public sealed class BrowserHost : IAsyncDisposable
             : reason;
     }
 
-    public static async Task<BrowserHost> StartAsync(IDictionary<string, string?>? settings = null)
+    /// <summary>
+    /// Starts the host on <paramref name="port"/> (0: any free port; a test that must know the address before the host
+    /// starts, e.g. to configure it, picks one with <see cref="FreePort"/>) and the browser.
+    /// </summary>
+    public static async Task<BrowserHost> StartAsync(IDictionary<string, string?>? settings = null, int port = 0)
     {
         var data = new TempFolder();
         var factory = new WebFactory(data.Path, settings);
-        factory.UseKestrel(0);
+        factory.UseKestrel(port);
         factory.StartServer();
         string baseUrl = factory.Services.GetRequiredService<IServer>().Features.Get<IServerAddressesFeature>()!.Addresses
             .First().Replace("[::]", "127.0.0.1", StringComparison.Ordinal).Replace("localhost", "127.0.0.1", StringComparison.Ordinal);
@@ -77,13 +85,42 @@ public sealed class BrowserHost : IAsyncDisposable
             ExecutablePath = ChromiumPath,
             Headless = true,
             BaseURL = baseUrl,
-            Args = ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+            Args = LaunchArgs,
         });
         return new BrowserHost(data, profile, factory, baseUrl, playwright, browser);
     }
 
+    /// <summary>A loopback port free at the time of asking.</summary>
+    public static int FreePort()
+    {
+        using var listener = new System.Net.Sockets.TcpListener(System.Net.IPAddress.Loopback, 0);
+        listener.Start();
+        return ((System.Net.IPEndPoint)listener.LocalEndpoint).Port;
+    }
+
+    /// <summary>
+    /// A fresh context that shares no cookies with <see cref="Browser"/> (nobody signed in), in a second browser
+    /// process: the persistent context's browser cannot open another context. Closed with the host.
+    /// </summary>
+    public async Task<IBrowserContext> NewContextAsync()
+    {
+        ObjectDisposedException.ThrowIf(_playwright is null, this);
+        _separate ??= await _playwright.Chromium.LaunchAsync(new BrowserTypeLaunchOptions
+        {
+            ExecutablePath = ChromiumPath,
+            Headless = true,
+            Args = LaunchArgs,
+        });
+        return await _separate.NewContextAsync(new BrowserNewContextOptions { BaseURL = BaseUrl });
+    }
+
     public async ValueTask DisposeAsync()
     {
+        if (_separate is not null)
+        {
+            await _separate.DisposeAsync();
+            _separate = null;
+        }
         await Browser.DisposeAsync();
         _playwright?.Dispose();
         _playwright = null;
