@@ -1,3 +1,4 @@
+using System.Globalization;
 using FilterQA.Core.Decisions;
 using FilterQA.Core.Sampling;
 using FilterQA.Core.Statistics;
@@ -332,6 +333,13 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
             // Under the same lot lock as a unit being stored, so the change is decided on the latest row.
             await LotLock.AcquireAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
             LotRecord lot = await FindAsync(context, lotNumber, cancellationToken).ConfigureAwait(false);
+            // A signed certificate vouches for the lot's record as it stands (its digest): the record is final from then on.
+            if (await context.Certificates.AsNoTracking().Where(c => c.LotId == lot.Id)
+                    .Select(c => new { c.CertificateNumber, c.SignerName, c.IssuedAt }).SingleOrDefaultAsync(cancellationToken).ConfigureAwait(false) is { } certificate)
+            {
+                throw new StorageRuleException(string.Create(CultureInfo.InvariantCulture,
+                    $"lot {lotNumber} has certificate of conformance {certificate.CertificateNumber}, signed by {certificate.SignerName} at {certificate.IssuedAt.UtcDateTime:yyyy-MM-dd HH:mm} UTC; a certified lot's record is final and is not changed"));
+            }
             await change(context, lot).ConfigureAwait(false);
             lot.Version++;
             try

@@ -166,6 +166,23 @@ public abstract partial class CertificateContract : ProviderTestBase
     }
 
     [StorageFact]
+    public async Task A_certified_lot_refuses_every_change_of_its_record_and_keeps_its_digest()
+    {
+        PreparedLot lot = await Store.DecidedLotAsync(ThreeGood);
+        CertificateService certificates = Store.Certificates();
+        IssuedCertificate issued = await certificates.IssueAsync(lot.LotNumber, "for shipment", Samples.Approver);
+
+        StorageRuleException overridden = await Assert.ThrowsAsync<StorageRuleException>(
+            () => Store.Lots.OverrideAsync(lot.LotNumber, false, "field returns", Samples.Approver));
+        Assert.Contains(issued.CertificateNumber, overridden.Message, StringComparison.Ordinal);
+        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Lots.HoldAsync(lot.LotNumber, "second look", Samples.Approver));
+        await Assert.ThrowsAsync<StorageRuleException>(() => Store.Lots.DecideAsync(lot.LotNumber, Samples.Approver));
+
+        Assert.Equal(issued.DataDigestSha256, await certificates.ComputeDigestAsync(lot.LotNumber));
+        Assert.Equal(LotStatus.Accepted, (await Store.Lots.GetSummaryAsync(lot.LotNumber)).Status);
+    }
+
+    [StorageFact]
     public async Task Certificate_numbers_never_repeat_sequentially_or_under_concurrent_issuers()
     {
         var lots = new List<PreparedLot>();
