@@ -63,6 +63,26 @@ public sealed class EnvelopeAccumulator
         Count++;
     }
 
+    /// <summary>
+    /// Folds in what <paramref name="other"/> has gathered (the least and greatest loss per bin, and its count), so
+    /// several workers can each fill their own accumulator and be merged at the end.
+    /// </summary>
+    /// <exception cref="ArgumentException">The other accumulator covers another span or another number of bins.</exception>
+    public void Merge(EnvelopeAccumulator other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        if (other._min.Length != _min.Length || other._startHz != _startHz || other._spanHz != _spanHz)
+        {
+            throw new ArgumentException("only an accumulator over the same span and bins can be merged", nameof(other));
+        }
+        for (int b = 0; b < _min.Length; b++)
+        {
+            _min[b] = Math.Min(_min[b], other._min[b]);
+            _max[b] = Math.Max(_max[b], other._max[b]);
+        }
+        Count += other.Count;
+    }
+
     /// <summary>The envelope of the sweeps added; bins no point fell in are left out.</summary>
     public LossEnvelope ToEnvelope()
     {

@@ -1,3 +1,4 @@
+using System.Threading.Channels;
 using FilterQA.Core.Decisions;
 using FilterQA.Core.Sampling;
 using FilterQA.Core.Statistics;
@@ -153,7 +154,9 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
     public const int ExampleSweeps = 3;
 
     // Every counted sweep is folded into the envelope as it is read and then dropped, so a period of many lots needs
-    // memory for the bins and three example sweeps only. The span comes first from the stored sweep columns.
+    // memory for the bins and three example sweeps only. The span comes first from the stored sweep columns. Decoding
+    // the compact traces is most of the work, so one worker per core decodes into its own accumulator while this
+    // method reads the rows; the accumulators are merged at the end (min and max do not depend on the order).
     private static async Task<(LossEnvelope Envelope, List<ResponseTrace> Examples, ResponseTrace? FirstTransmission)> CountedSweepsAsync(
         FilterQaDbContext context, long[] lotIds, CancellationToken cancellationToken)
     {
@@ -166,31 +169,85 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
         {
             return (LossEnvelope.Empty, [], null);
         }
-        var accumulator = new EnvelopeAccumulator(span.StartHz, span.StopHz, EnvelopeBuilder.DefaultBinCount);
         var picks = new HashSet<int>(Enumerable.Range(0, Math.Min(ExampleSweeps, span.Count))
             .Select(i => ExampleSweeps == 1 || span.Count == 1 ? 0 : (int)((long)i * (span.Count - 1) / (Math.Min(ExampleSweeps, span.Count) - 1))));
-        var examples = new List<ResponseTrace>(ExampleSweeps);
-        ResponseTrace? transmission = null;
-        int index = 0;
         IAsyncEnumerable<byte[]> blobs = context.Units.AsNoTracking().Where(u => lotIds.Contains(u.LotId) && u.CountedMeasurementId != null)
             .OrderBy(u => u.LotId).ThenBy(u => u.SamplePosition)
             .Join(context.Measurements.AsNoTracking(), u => u.CountedMeasurementId, m => (long?)m.Id, (u, m) => m.Sweep.Trace)
             .AsAsyncEnumerable();
-        await foreach (byte[] blob in blobs.WithCancellation(cancellationToken).ConfigureAwait(false))
+
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
+        var queue = Channel.CreateBounded<(int Index, byte[] Blob)>(new BoundedChannelOptions(64) { SingleWriter = true });
+        var workers = new SweepWorker[Math.Max(1, Environment.ProcessorCount)];
+        for (int w = 0; w < workers.Length; w++)
         {
-            ResponseTrace trace = ResponseTraceCodec.Decode(blob);
-            accumulator.Add(trace);
-            if (picks.Contains(index))
-            {
-                examples.Add(trace);
-            }
-            if (transmission is null && trace.Path == ResponsePath.Transmission)
-            {
-                transmission = trace;
-            }
-            index++;
+            workers[w] = new SweepWorker(new EnvelopeAccumulator(span.StartHz, span.StopHz, EnvelopeBuilder.DefaultBinCount), picks);
         }
-        return (accumulator.ToEnvelope(), examples, transmission);
+        Task[] running = workers.Select(worker => Task.Run(() => worker.RunAsync(queue.Reader, stop), stop.Token)).ToArray();
+        int index = 0;
+        try
+        {
+            await foreach (byte[] blob in blobs.WithCancellation(stop.Token).ConfigureAwait(false))
+            {
+                await queue.Writer.WriteAsync((index++, blob), stop.Token).ConfigureAwait(false);
+            }
+        }
+        catch (OperationCanceledException) when (!cancellationToken.IsCancellationRequested)
+        {
+            // A worker failed and stopped the reading; its exception is thrown by the wait below.
+        }
+        finally
+        {
+            queue.Writer.TryComplete();
+        }
+        await Task.WhenAll(running).ConfigureAwait(false);
+
+        EnvelopeAccumulator envelope = workers[0].Envelope;
+        foreach (SweepWorker worker in workers.Skip(1))
+        {
+            envelope.Merge(worker.Envelope);
+        }
+        List<ResponseTrace> examples = workers.SelectMany(w => w.Picked).OrderBy(p => p.Index).Select(p => p.Trace).ToList();
+        ResponseTrace? transmission = workers.Where(w => w.FirstTransmission is not null).MinBy(w => w.FirstTransmissionIndex)?.FirstTransmission;
+        return (envelope.ToEnvelope(), examples, transmission);
+    }
+
+    /// <summary>One decoding worker of <see cref="CountedSweepsAsync"/>: its own envelope, the example sweeps it met, its earliest transmission.</summary>
+    private sealed class SweepWorker(EnvelopeAccumulator envelope, HashSet<int> picks)
+    {
+        public EnvelopeAccumulator Envelope { get; } = envelope;
+
+        public List<(int Index, ResponseTrace Trace)> Picked { get; } = [];
+
+        public int FirstTransmissionIndex { get; private set; } = int.MaxValue;
+
+        public ResponseTrace? FirstTransmission { get; private set; }
+
+        public async Task RunAsync(ChannelReader<(int Index, byte[] Blob)> queue, CancellationTokenSource stop)
+        {
+            try
+            {
+                await foreach ((int index, byte[] blob) in queue.ReadAllAsync(stop.Token).ConfigureAwait(false))
+                {
+                    ResponseTrace trace = ResponseTraceCodec.Decode(blob);
+                    Envelope.Add(trace);
+                    if (picks.Contains(index))
+                    {
+                        Picked.Add((index, trace));
+                    }
+                    if (index < FirstTransmissionIndex && trace.Path == ResponsePath.Transmission)
+                    {
+                        (FirstTransmissionIndex, FirstTransmission) = (index, trace);
+                    }
+                }
+            }
+            catch
+            {
+                // Stop the reader (and the other workers) so nobody waits on a queue this worker no longer empties.
+                await stop.CancelAsync().ConfigureAwait(false);
+                throw;
+            }
+        }
     }
 
     private static async Task<IReadOnlyList<NonConformingUnit>> NonConformingAsync(FilterQaDbContext context, long[] lotIds, CancellationToken cancellationToken)

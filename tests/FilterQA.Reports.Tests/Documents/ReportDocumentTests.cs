@@ -123,6 +123,30 @@ public sealed class ReportDocumentTests
         Assert.Equal(sweeps.Length, envelope.TraceCount);
     }
 
+    [Fact]
+    public void Envelopes_filled_by_separate_workers_merge_to_the_envelope_of_all_sweeps()
+    {
+        var sweeps = SyntheticContent.Sweeps(40);
+        double start = sweeps.Min(t => t.Grid.StartHz), stop = sweeps.Max(t => t.Grid.StopHz);
+        var whole = new EnvelopeAccumulator(start, stop, 50);
+        var even = new EnvelopeAccumulator(start, stop, 50);
+        var odd = new EnvelopeAccumulator(start, stop, 50);
+        for (int i = 0; i < sweeps.Length; i++)
+        {
+            whole.Add(sweeps[i]);
+            (i % 2 == 0 ? even : odd).Add(sweeps[i]);
+        }
+        even.Merge(odd);
+        // The least of the least and the greatest of the greatest per bin is the least and greatest of all: exact,
+        // and the single accumulator is itself checked against a brute-force scan above.
+        LossEnvelope merged = even.ToEnvelope(), expected = whole.ToEnvelope();
+        Assert.Equal(expected.CentresHz.ToArray(), merged.CentresHz.ToArray());
+        Assert.Equal(expected.MinLossDb.ToArray(), merged.MinLossDb.ToArray());
+        Assert.Equal(expected.MaxLossDb.ToArray(), merged.MaxLossDb.ToArray());
+        Assert.Equal(sweeps.Length, merged.TraceCount);
+        Assert.Throws<ArgumentException>(() => even.Merge(new EnvelopeAccumulator(start, stop, 49)));
+    }
+
     private static void AssertAfter(IReadOnlyList<string[]> lines, string[] label, double expected)
     {
         foreach (string[] line in lines)
