@@ -54,6 +54,12 @@ public partial class Trends
 
     private bool Live { get; set; }
 
+    private DateOnly? ReportFrom { get; set; }
+
+    private DateOnly? ReportTo { get; set; }
+
+    private string ReportPaper { get; set; } = "a4";
+
     protected override async Task OnInitializedAsync() => Parts = await PartList.PartNumbersAsync().ConfigureAwait(true);
 
     protected override async Task OnParametersSetAsync()
@@ -100,6 +106,9 @@ public partial class Trends
                 Problem = $"No lot of {View.PartNumber} comes from {s}.";
             }
             YieldChart = TrendChartBuilder.Yields(View.Lots);
+            // The period offered at first spans the lots shown.
+            ReportFrom = View.Lots.Count > 0 ? DateOnly.FromDateTime(View.Lots.Min(l => l.CreatedAt).UtcDateTime) : null;
+            ReportTo = View.Lots.Count > 0 ? DateOnly.FromDateTime(View.Lots.Max(l => l.CreatedAt).UtcDateTime) : null;
             Select(View.Parameters.FirstOrDefault(p => p.RuleId == RuleId)?.RuleId ?? View.Parameters.FirstOrDefault()?.RuleId);
         }
         catch (RecordNotFoundException e)
@@ -110,6 +119,9 @@ public partial class Trends
     }
 
     private void RuleChanged(ChangeEventArgs e) => Select(e.Value as string);
+
+    private string PeriodReportHref(TrendPage view) => string.Create(CultureInfo.InvariantCulture,
+        $"parts/{Uri.EscapeDataString(view.PartNumber)}/yield-report.pdf?from={ReportFrom:yyyy-MM-dd}&to={ReportTo:yyyy-MM-dd}&paper={ReportPaper}");
 
     private void Select(string? ruleId)
     {
@@ -149,6 +161,6 @@ public partial class Trends
     {
         double slope = LotTrend.SlopePerLot(trend.Trend.Cpks());
         string drift = double.IsNaN(slope) ? "" : string.Create(CultureInfo.InvariantCulture, $" Least-squares slope {slope:+0.000;-0.000} per lot.");
-        return $"Ppk per lot (capability from each lot's overall standard deviation) with the 1.33 reference line.{drift}";
+        return $"Cpk per lot, computed from each lot's overall standard deviation (so strictly Ppk), with the 1.33 reference line.{drift}";
     }
 }

@@ -38,6 +38,8 @@ public sealed class LotPageTests : SeededStore
         var rows = cut.FindAll("table.list tbody tr");
         Assert.Equal(3, rows.Count);
         Assert.Equal(["Go", "NoGo", "Go"], rows.Select(r => r.GetAttribute("data-verdict") ?? "").ToArray());
+        // Each unit links its counted measurement's one-page report.
+        Assert.All(rows, r => Assert.Matches(@"^measurements/\d+/report\.pdf$", r.QuerySelector("a[download]")?.GetAttribute("href") ?? ""));
         // Three counted sweeps go into the envelope; the caption says how many.
         Assert.Contains("of 3 counted sweeps", cut.Find("#overlay-title + figure figcaption").TextContent, StringComparison.Ordinal);
         Assert.Contains("reject", cut.Find("table.pareto").TextContent, StringComparison.Ordinal);

@@ -69,6 +69,13 @@ public sealed class TrendsPageTests : SeededStore
         Assert.Equal(4, cut.FindComponents<SweepChart>().Count);
         Assert.Equal(2, cut.FindAll("table.capability tbody tr").Count);
 
+        // The part's yield report over a period starts with the span of the lots shown (their registration days, UTC).
+        string[] days = (await Services.GetRequiredService<LotService>().FindLotsAsync(new LotQuery { PartNumber = PartNumber }))
+            .Select(l => l.CreatedAt.UtcDateTime.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture)).Order(StringComparer.Ordinal).ToArray();
+        Assert.Equal($"parts/{PartNumber}/yield-report.pdf?from={days[0]}&to={days[^1]}&paper=a4", cut.Find("#t-period-report").GetAttribute("href"));
+        cut.Find("#t-paper").Change("letter");
+        Assert.EndsWith("&paper=letter", cut.Find("#t-period-report").GetAttribute("href"), StringComparison.Ordinal);
+
         cut.Find("#t-rule").Change("loss");
         cut.WaitForAssertion(() => Assert.Equal("loss", cut.Find("article.parameter-trend").GetAttribute("data-rule")), TimeSpan.FromSeconds(10));
         Assert.Contains("dB", cut.Find("table.capability").TextContent, StringComparison.Ordinal);
