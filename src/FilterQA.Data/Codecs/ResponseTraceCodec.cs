@@ -1,3 +1,5 @@
+using System.Buffers;
+using System.Buffers.Binary;
 using System.Globalization;
 using System.IO.Compression;
 using FilterQA.Core.Sweeps;
@@ -22,6 +24,9 @@ public static class ResponseTraceCodec
 {
     private const byte Version = 1;
     private const int MaxPoints = 10_000_000;
+
+    // Path, flags, count, a raw float64 grid and two float32 arrays: the longest body a valid trace has.
+    private const long MaxBodyBytes = 6 + 16L * MaxPoints;
     private static ReadOnlySpan<byte> Magic => "FQTR"u8;
 
     /// <summary>Encodes <paramref name="trace"/>; throws when a loss or phase value does not fit a float32.</summary>
@@ -65,22 +70,13 @@ public static class ResponseTraceCodec
         {
             throw new InvalidDataException(Say($"trace blob: version {encoded[Magic.Length]} is not supported (this build reads version {Version})"));
         }
-        byte[] plain;
+        // Re-evaluation and reports decode many thousands of traces: decompress straight into a pooled buffer and read
+        // the body from it, instead of copying through streams.
+        byte[] plain = ArrayPool<byte>.Shared.Rent(Math.Max(16 * 1024, encoded.Length * 4));
         try
         {
-            using var input = new MemoryStream(encoded[(Magic.Length + 1)..].ToArray());
-            using var brotli = new BrotliStream(input, CompressionMode.Decompress);
-            using var copy = new MemoryStream();
-            brotli.CopyTo(copy);
-            plain = copy.ToArray();
-        }
-        catch (InvalidOperationException problem)
-        {
-            throw new InvalidDataException("trace blob: the compressed body is damaged", problem);
-        }
-        try
-        {
-            return ReadBody(plain);
+            int length = Decompress(encoded[(Magic.Length + 1)..], ref plain);
+            return ReadBody(plain.AsSpan(0, length));
         }
         catch (EndOfStreamException problem)
         {
@@ -90,34 +86,70 @@ public static class ResponseTraceCodec
         {
             throw new InvalidDataException("trace blob: the decoded values do not form a valid trace: " + problem.Message, problem);
         }
+        finally
+        {
+            ArrayPool<byte>.Shared.Return(plain);
+        }
     }
 
-    private static ResponseTrace ReadBody(byte[] plain)
+    // Grows the (pooled) buffer while the decoder asks for room; a damaged or cut stream is named as such.
+    private static int Decompress(ReadOnlySpan<byte> compressed, ref byte[] buffer)
     {
-        using var reader = new BinaryReader(new MemoryStream(plain));
-        var path = (ResponsePath)reader.ReadByte();
+        using var decoder = new BrotliDecoder();
+        int total = 0;
+        while (true)
+        {
+            OperationStatus status = decoder.Decompress(compressed, buffer.AsSpan(total), out int consumed, out int written);
+            compressed = compressed[consumed..];
+            total += written;
+            switch (status)
+            {
+                case OperationStatus.Done:
+                    return total;
+                case OperationStatus.DestinationTooSmall:
+                    if (buffer.Length >= MaxBodyBytes)
+                    {
+                        throw new InvalidDataException(Say($"trace blob: the body is longer than the {MaxBodyBytes} bytes a trace of {MaxPoints} points can have"));
+                    }
+                    byte[] larger = ArrayPool<byte>.Shared.Rent((int)Math.Min(2L * buffer.Length, MaxBodyBytes));
+                    buffer.AsSpan(0, total).CopyTo(larger);
+                    ArrayPool<byte>.Shared.Return(buffer);
+                    buffer = larger;
+                    break;
+                case OperationStatus.NeedMoreData:
+                    throw new InvalidDataException("trace blob: the compressed body ends early");
+                default:
+                    throw new InvalidDataException("trace blob: the compressed body is damaged");
+            }
+        }
+    }
+
+    private static ResponseTrace ReadBody(ReadOnlySpan<byte> plain)
+    {
+        var reader = new BodyReader(plain);
+        var path = (ResponsePath)reader.Byte();
         if (!Enum.IsDefined(path))
         {
             throw new InvalidDataException(Say($"trace blob: response path {(int)path} is not defined"));
         }
-        byte flags = reader.ReadByte();
+        byte flags = reader.Byte();
         bool hasPhase = (flags & 1) != 0;
         var form = (GridForm)((flags >> 1) & 3);
         if ((flags & ~7) != 0 || !Enum.IsDefined(form))
         {
             throw new InvalidDataException(Say($"trace blob: flags 0x{flags:x2} are not defined"));
         }
-        int n = reader.ReadInt32();
+        int n = reader.Int32();
         if (n < 1 || n > MaxPoints)
         {
             throw new InvalidDataException(Say($"trace blob: point count {n} is outside 1 to {MaxPoints}"));
         }
-        FrequencyGrid grid = ReadGrid(reader, form, n);
-        double[] loss = ReadFloats(reader, n);
-        double[] phase = hasPhase ? ReadFloats(reader, n) : [];
-        if (reader.BaseStream.Position != plain.Length)
+        FrequencyGrid grid = ReadGrid(ref reader, form, n);
+        double[] loss = ReadFloats(ref reader, n);
+        double[] phase = hasPhase ? ReadFloats(ref reader, n) : [];
+        if (reader.Remaining != 0)
         {
-            throw new InvalidDataException(Say($"trace blob: {plain.Length - reader.BaseStream.Position} bytes follow the last value"));
+            throw new InvalidDataException(Say($"trace blob: {reader.Remaining} bytes follow the last value"));
         }
         return ResponseTrace.Create(grid, path, loss, phase);
     }
@@ -176,19 +208,19 @@ public static class ResponseTraceCodec
         }
     }
 
-    private static FrequencyGrid ReadGrid(BinaryReader reader, GridForm form, int n)
+    private static FrequencyGrid ReadGrid(ref BodyReader reader, GridForm form, int n)
     {
         switch (form)
         {
             case GridForm.Linear:
-                double start = reader.ReadDouble(), stop = reader.ReadDouble();
+                double start = reader.Double(), stop = reader.Double();
                 return FrequencyGrid.Linear(start, stop, n);
             case GridForm.MillihertzDeltas:
                 var hz = new double[n];
                 long q = 0;
                 for (int i = 0; i < n; i++)
                 {
-                    long zigzag = reader.Read7BitEncodedInt64();
+                    long zigzag = reader.Varint64();
                     q += (long)((ulong)zigzag >> 1) ^ -(zigzag & 1);
                     hz[i] = q / 1000.0;
                 }
@@ -197,7 +229,7 @@ public static class ResponseTraceCodec
                 var raw = new double[n];
                 for (int i = 0; i < n; i++)
                 {
-                    raw[i] = reader.ReadDouble();
+                    raw[i] = reader.Double();
                 }
                 return FrequencyGrid.FromHz(raw);
         }
@@ -222,24 +254,59 @@ public static class ResponseTraceCodec
         writer.Write(bytes);
     }
 
-    private static double[] ReadFloats(BinaryReader reader, int n)
+    private static double[] ReadFloats(ref BodyReader reader, int n)
     {
-        byte[] bytes = reader.ReadBytes(n * 4);
-        if (bytes.Length != n * 4)
-        {
-            throw new EndOfStreamException();
-        }
+        ReadOnlySpan<byte> bytes = reader.Bytes(n * 4);
+        ReadOnlySpan<byte> b0 = bytes[..n], b1 = bytes.Slice(n, n), b2 = bytes.Slice(2 * n, n), b3 = bytes.Slice(3 * n, n);
         var values = new double[n];
         for (int i = 0; i < n; i++)
         {
-            uint word = 0;
-            for (int plane = 0; plane < 4; plane++)
-            {
-                word |= (uint)bytes[plane * n + i] << (8 * plane);
-            }
+            uint word = b0[i] | ((uint)b1[i] << 8) | ((uint)b2[i] << 16) | ((uint)b3[i] << 24);
             values[i] = BitConverter.UInt32BitsToSingle(word);
         }
         return values;
+    }
+
+    /// <summary>Little-endian reads from the decompressed body, as <see cref="BinaryWriter"/> wrote it; a short body ends early.</summary>
+    private ref struct BodyReader(ReadOnlySpan<byte> body)
+    {
+        private readonly ReadOnlySpan<byte> _body = body;
+        private int _at;
+
+        public readonly int Remaining => _body.Length - _at;
+
+        public ReadOnlySpan<byte> Bytes(int count)
+        {
+            if (count < 0 || count > Remaining)
+            {
+                throw new EndOfStreamException();
+            }
+            ReadOnlySpan<byte> taken = _body.Slice(_at, count);
+            _at += count;
+            return taken;
+        }
+
+        public byte Byte() => Bytes(1)[0];
+
+        public int Int32() => BinaryPrimitives.ReadInt32LittleEndian(Bytes(4));
+
+        public double Double() => BinaryPrimitives.ReadDoubleLittleEndian(Bytes(8));
+
+        // BinaryWriter.Write7BitEncodedInt64: seven bits a byte, low group first, high bit set on every byte but the last.
+        public long Varint64()
+        {
+            ulong result = 0;
+            for (int shift = 0; shift < 70; shift += 7)
+            {
+                byte b = Byte();
+                result |= (ulong)(b & 0x7F) << shift;
+                if ((b & 0x80) == 0)
+                {
+                    return (long)result;
+                }
+            }
+            throw new InvalidDataException("trace blob: a frequency step is not a valid 7-bit encoded integer");
+        }
     }
 
     private static string Say(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
