@@ -25,6 +25,10 @@ public partial class LotDocuments
     [Parameter, EditorRequired]
     public LotSummary Summary { get; set; } = null!;
 
+    /// <summary>Called after a certificate is newly signed, so the page around it can show the lot's record as final.</summary>
+    [Parameter]
+    public EventCallback OnSigned { get; set; }
+
     private IssuedCertificate? Certificate { get; set; }
 
     private string Paper { get; set; } = "a4";
@@ -102,6 +106,10 @@ public partial class LotDocuments
                     ? $"Certificate {certificate.CertificateNumber} is signed."
                     : $"This lot already had certificate {certificate.CertificateNumber}; nothing new was issued.";
                 Reason = null;
+                if (certificate.NewlyIssued)
+                {
+                    await OnSigned.InvokeAsync().ConfigureAwait(true);
+                }
             }
             else
             {

@@ -11,5 +11,6 @@ namespace FilterQA.Web.Ui.Services;
 /// <param name="Envelope">Min/max loss of every counted sweep per frequency bin.</param>
 /// <param name="MaskLines">Limit lines for the overlay; empty when none can be placed.</param>
 /// <param name="MaskNote">How the limit lines were placed, or why there are none.</param>
+/// <param name="CertificateNumber">The signed certificate of conformance, when there is one (the lot's record is then final).</param>
 public sealed record LotPage(LotSummary Summary, LotStatistics Statistics, IReadOnlyList<UnitRow> Units, LossEnvelope Envelope,
-    IReadOnlyList<MaskLine> MaskLines, string MaskNote);
+    IReadOnlyList<MaskLine> MaskLines, string MaskNote, string? CertificateNumber = null);

@@ -3,6 +3,7 @@ using FilterQA.Core.Sweeps;
 using FilterQA.Core.Templates;
 using FilterQA.Data;
 using FilterQA.Data.Services;
+using FilterQA.Data.Services.Certificates;
 using FilterQA.Web.Ui.Charts;
 
 namespace FilterQA.Web.Ui.Services;
@@ -11,7 +12,7 @@ namespace FilterQA.Web.Ui.Services;
 /// Reads a lot for its page and carries out the approver's dispositions. The services enforce who may do
 /// what; this class turns their refusals into a message for the page instead of an error screen.
 /// </summary>
-public sealed class LotPageModel(LotService lots, LotUnitsReader units, TemplateCatalog templates)
+public sealed class LotPageModel(LotService lots, LotUnitsReader units, TemplateCatalog templates, CertificateService certificates)
 {
     /// <summary>The lot's summary, statistics, units and overlay.</summary>
     /// <exception cref="RecordNotFoundException">The lot does not exist.</exception>
@@ -24,7 +25,8 @@ public sealed class LotPageModel(LotService lots, LotUnitsReader units, Template
         LossEnvelope envelope = EnvelopeDecimator.Decimate(traces, envelopeBins);
         LimitTemplate template = await templates.LoadAsync(summary.PartNumber, summary.TemplateRevision, cancellationToken).ConfigureAwait(false);
         (IReadOnlyList<MaskLine> mask, string note) = PlaceMask(template, traces, rows);
-        return new LotPage(summary, statistics, rows, envelope, mask, note);
+        IssuedCertificate? certificate = await certificates.GetAsync(lotNumber, cancellationToken).ConfigureAwait(false);
+        return new LotPage(summary, statistics, rows, envelope, mask, note, certificate?.CertificateNumber);
     }
 
     /// <summary>Accepts or rejects the lot as its plan decides.</summary>

@@ -96,6 +96,9 @@ public sealed partial class CertificateBrowserTests
         Assert.Equal(stored.DataDigestSha256, (await panel.Locator("code[data-digest]").InnerTextAsync()).Trim());
         await Assertions.Expect(panel.Locator("p.done")).ToHaveTextAsync($"Certificate {stored.CertificateNumber} is signed.");
         await Assertions.Expect(panel.GetByRole(AriaRole.Button, new() { NameRegex = new("^Sign") })).ToHaveCountAsync(0);
+        // A certified lot's record is final: the disposition section says so instead of offering hold, decide or override.
+        await Assertions.Expect(page.Locator("#disp-final")).ToContainTextAsync(stored.CertificateNumber, new() { Timeout = WaitMs });
+        await Assertions.Expect(page.Locator("section.disposition button")).ToHaveCountAsync(0);
         await page.ScreenshotAsync(new() { Path = Path.Combine(BrowserHost.ScreenshotsFolder, "lot-certificate.png"), FullPage = true });
 
         // The download link gives the PDF; PdfPig (independent of the writer) reads it back.
