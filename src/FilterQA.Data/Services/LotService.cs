@@ -251,16 +251,7 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
             .OrderBy(r => r.Ordinal).ThenBy(r => r.MeasurementId)
             .ToListAsync(cancellationToken).ConfigureAwait(false);
         ParetoChart pareto = ParetoChart.FromFailures(rules.Where(r => !UnitEvaluation.Passes(r.Outcome, lot.DecisionRule)).Select(r => r.RuleId));
-        var parameters = new List<ParameterSummary>();
-        foreach (IGrouping<string, RuleResultRecord> rule in rules.GroupBy(r => r.RuleId))
-        {
-            double[] values = rule.Where(r => r.MeasuredValue is { } v && double.IsFinite(v)).Select(r => r.MeasuredValue!.Value).ToArray();
-            if (values.Length > 0)
-            {
-                parameters.Add(ParameterSummary.Compute(rule.Key, UnitSymbol(rule.First().Unit), values, Limits(rule)));
-            }
-        }
-        return new LotStatistics(yield, pareto, parameters);
+        return new LotStatistics(yield, pareto, RuleParameters.Summarise(rules));
     }
 
     /// <summary>
@@ -427,18 +418,4 @@ public sealed class LotService(IDbContextFactory<FilterQaDbContext> contexts, Ti
         }).ToArray();
         return SwitchingRules.Evaluate(history, options);
     }
-
-    private static SpecLimits? Limits(IEnumerable<RuleResultRecord> results)
-    {
-        RuleResultRecord[] withLimit = results.Where(r => r.LimitValue is { } v && double.IsFinite(v)).ToArray();
-        double? lower = withLimit.FirstOrDefault(r => r.Sense == LimitSense.AtLeast)?.LimitValue;
-        double? upper = withLimit.FirstOrDefault(r => r.Sense == LimitSense.AtMost)?.LimitValue;
-        if (lower is null && upper is null)
-        {
-            return null;
-        }
-        return lower is { } lo && upper is { } hi && lo >= hi ? null : new SpecLimits(lower, upper);
-    }
-
-    internal static string UnitSymbol(RuleUnit unit) => unit.Symbol();
 }

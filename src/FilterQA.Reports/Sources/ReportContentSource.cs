@@ -280,28 +280,7 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
             .Join(context.RuleResults.AsNoTracking(), u => u.CountedMeasurementId, r => (long?)r.MeasurementId, (u, r) => r)
             .OrderBy(r => r.Ordinal).ThenBy(r => r.MeasurementId)
             .ToListAsync(cancellationToken).ConfigureAwait(false);
-        var parameters = new List<ParameterSummary>();
-        foreach (IGrouping<string, RuleResultRecord> rule in results.GroupBy(r => r.RuleId))
-        {
-            double[] values = rule.Where(r => r.MeasuredValue is { } v && double.IsFinite(v)).Select(r => r.MeasuredValue!.Value).ToArray();
-            if (values.Length > 0)
-            {
-                parameters.Add(ParameterSummary.Compute(rule.Key, rule.First().Unit.Symbol(), values, Limits(rule)));
-            }
-        }
-        return parameters;
-    }
-
-    private static SpecLimits? Limits(IEnumerable<RuleResultRecord> results)
-    {
-        RuleResultRecord[] withLimit = results.Where(r => r.LimitValue is { } v && double.IsFinite(v)).ToArray();
-        double? lower = withLimit.FirstOrDefault(r => r.Sense == LimitSense.AtLeast)?.LimitValue;
-        double? upper = withLimit.FirstOrDefault(r => r.Sense == LimitSense.AtMost)?.LimitValue;
-        if (lower is null && upper is null)
-        {
-            return null;
-        }
-        return lower is { } lo && upper is { } hi && lo >= hi ? null : new SpecLimits(lower, upper);
+        return RuleParameters.Summarise(results);
     }
 
     private static async Task<LotHeader> HeaderAsync(FilterQaDbContext context, LotSummary lot, CancellationToken cancellationToken)
@@ -325,17 +304,10 @@ public sealed class ReportContentSource(IDbContextFactory<FilterQaDbContext> con
     // Limit lines that follow a measured centre or the least loss move from unit to unit: they are placed as for one unit, and the note says so.
     private static (IReadOnlyList<MaskLine> Mask, string Note) PlaceMask(LimitTemplate template, ResponseTrace trace, string serial)
     {
-        var gainDb = new double[trace.Grid.Count];
-        ReadOnlySpan<double> loss = trace.LossDb;
-        for (int i = 0; i < gainDb.Length; i++)
-        {
-            gainDb[i] = -loss[i]; // a gain trace is the negative of the loss
-        }
         try
         {
-            Sweep sweep = Sweep.FromScalar(ScalarTrace.Create(trace.Grid, ScalarQuantity.GainDb, gainDb), SweepSource.Of(serial, SweepFormat.Synthetic));
-            UnitEvaluation evaluation = TemplateEvaluator.Evaluate(template, MeasurementInput.FromSweep(sweep, null, null));
-            return (evaluation.MaskLines, evaluation.MaskLines.Count == 0
+            IReadOnlyList<MaskLine> lines = MaskPlacement.ForTrace(template, trace, serial);
+            return (lines, lines.Count == 0
                 ? "The template has no limit lines to draw."
                 : $"Limit lines placed as for {serial}; lines that follow a measured centre or the least loss shift a little from unit to unit.");
         }

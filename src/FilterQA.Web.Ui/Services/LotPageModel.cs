@@ -76,19 +76,11 @@ public sealed class LotPageModel(LotService lots, LotUnitsReader units, Template
         {
             return ([], traces.Count == 0 ? "No unit measured yet." : "These sweeps are reflections; the template's limit lines apply to transmission.");
         }
-        ResponseTrace trace = traces[index];
-        var gainDb = new double[trace.Grid.Count];
-        ReadOnlySpan<double> loss = trace.LossDb;
-        for (int i = 0; i < gainDb.Length; i++)
-        {
-            gainDb[i] = -loss[i]; // a gain trace is the negative of the loss
-        }
         string serial = rows.Where(r => r.CountedMeasurementId is not null).Select(r => r.Serial).ElementAtOrDefault(index) ?? "the first unit";
         try
         {
-            Sweep sweep = Sweep.FromScalar(ScalarTrace.Create(trace.Grid, ScalarQuantity.GainDb, gainDb), SweepSource.Of(serial, SweepFormat.Synthetic));
-            UnitEvaluation evaluation = TemplateEvaluator.Evaluate(template, MeasurementInput.FromSweep(sweep, null, null));
-            return (evaluation.MaskLines, evaluation.MaskLines.Count == 0
+            IReadOnlyList<MaskLine> lines = MaskPlacement.ForTrace(template, traces[index], serial);
+            return (lines, lines.Count == 0
                 ? "The template has no limit lines to draw."
                 : $"Limit lines placed as for unit {serial}; lines that follow a measured centre or the least loss shift a little from unit to unit.");
         }
